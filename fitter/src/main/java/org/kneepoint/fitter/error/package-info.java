@@ -1,0 +1,5 @@
+/**
+ * The error vocabulary shared by every module: bad input, not found, conflict, numerical failure.
+ * Code throws these; the CLI and the HTTP layer each render them in one place.
+ */
+package org.kneepoint.fitter.error;
