@@ -48,6 +48,8 @@ public final class CurveFileReader {
             try (BufferedReader reader = new BufferedReader(new InputStreamReader(Files.newInputStream(path), decoder))) {
                 return read(source, reader);
             }
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new BadInputException(InputLocation.of(source), "no such file (looked for " + path + ")");
         } catch (CharacterCodingException e) {
             throw new BadInputException(InputLocation.of(source), "the file is not UTF-8 text");
         } catch (IOException e) {
