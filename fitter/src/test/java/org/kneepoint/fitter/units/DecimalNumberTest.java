@@ -16,7 +16,7 @@ class DecimalNumberTest {
 
     @Test
     void refuses_non_finite_and_java_only_spellings() {
-        for (String text : new String[] {"NaN", "Infinity", "-Infinity", "1e400", "0x10", "1f", "1d", "", "1.2.3", "--1"}) {
+        for (String text : new String[] {"NaN", "Infinity", "-Infinity", "1e400", "0x10", "1f", "1d", "", "1.2.3", "--1", ".", "-", "1e", "1e+", "e5", "1 2", "١٢"}) {
             assertTrue(Double.isNaN(DecimalNumber.parseOrNaN(text, true)), text);
         }
     }

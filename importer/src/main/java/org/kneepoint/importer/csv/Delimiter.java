@@ -30,8 +30,23 @@ enum Delimiter {
         return this != COMMA;
     }
 
+    /** The cells of a line, empty cells kept. */
     String[] split(String line) {
-        return line.split(java.util.regex.Pattern.quote(String.valueOf(character)), -1);
+        int count = 1;
+        for (int i = 0; i < line.length(); i++) {
+            if (line.charAt(i) == character) {
+                count++;
+            }
+        }
+        String[] cells = new String[count];
+        int start = 0;
+        for (int cell = 0; cell < count - 1; cell++) {
+            int end = line.indexOf(character, start);
+            cells[cell] = line.substring(start, end);
+            start = end + 1;
+        }
+        cells[count - 1] = line.substring(start);
+        return cells;
     }
 
     String word() {
