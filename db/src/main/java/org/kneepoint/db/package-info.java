@@ -1,5 +1,8 @@
 /**
- * Persistence of the material library: Flyway migrations, generated jOOQ classes and stores that
- * map rows to {@code fitter} types. Embedded H2 by default, PostgreSQL by JDBC URL.
+ * Persistence of the material library: Flyway migrations ({@code db/migration}), jOOQ classes
+ * generated from them at build time ({@code org.kneepoint.db.jooq}, never used outside this
+ * package), and stores mapping rows to the value types of {@code org.kneepoint.fitter.library}.
+ * Embedded H2 file database by default, PostgreSQL when given a JDBC URL. Every import, restore
+ * or edit runs in one transaction: on any error nothing is written.
  */
 package org.kneepoint.db;

@@ -1,0 +1,168 @@
+package org.kneepoint.db;
+
+import static org.kneepoint.db.jooq.Tables.CURVE;
+import static org.kneepoint.db.jooq.Tables.CURVE_POINT;
+import static org.kneepoint.db.jooq.Tables.FIT;
+import static org.kneepoint.db.jooq.Tables.GRADE;
+import static org.kneepoint.db.jooq.Tables.IMPORT_RECORD;
+import static org.kneepoint.db.jooq.Tables.MATERIAL_FAMILY;
+import static org.kneepoint.db.jooq.Tables.SUSCEPTIBILITY_POINT;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.jooq.Condition;
+import org.jooq.DSLContext;
+import org.jooq.Record;
+import org.jooq.Table;
+import org.jooq.impl.DSL;
+import org.kneepoint.fitter.curve.CurveKind;
+import org.kneepoint.fitter.curve.DemagnetizationCurve;
+import org.kneepoint.fitter.curve.Quantity;
+import org.kneepoint.fitter.library.FitRecord;
+import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.GradeSummary;
+import org.kneepoint.fitter.library.ImportInfo;
+import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.fitter.library.LibrarySnapshot;
+import org.kneepoint.fitter.library.SusceptibilityPoint;
+import org.kneepoint.fitter.units.SusceptibilityForm;
+
+/** Reads the library into its value types, always in a fixed order. */
+public final class LibraryReader {
+
+    private final DSLContext dsl;
+
+    LibraryReader(DSLContext dsl) {
+        this.dsl = dsl;
+    }
+
+    /** Every grade (of one family, when given), by name, with the temperatures of its curves. */
+    public List<GradeSummary> grades(String family) {
+        Condition filter = family == null ? DSL.noCondition() : MATERIAL_FAMILY.NAME.eq(family);
+        Map<Long, List<Double>> temperatures = new LinkedHashMap<>();
+        Map<Long, Integer> curveCounts = new LinkedHashMap<>();
+        dsl.select(CURVE.GRADE_ID, CURVE.TEMPERATURE_K).from(CURVE).orderBy(CURVE.GRADE_ID, CURVE.TEMPERATURE_K)
+                .forEach(row -> {
+                    List<Double> list = temperatures.computeIfAbsent(row.value1(), id -> new ArrayList<>());
+                    if (list.isEmpty() || !list.get(list.size() - 1).equals(row.value2())) {
+                        list.add(row.value2());
+                    }
+                    curveCounts.merge(row.value1(), 1, Integer::sum);
+                });
+        List<GradeSummary> grades = new ArrayList<>();
+        dsl.select(GRADE.ID, GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER).from(GRADE)
+                .join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
+                .where(filter).orderBy(GRADE.NAME)
+                .forEach(row -> grades.add(new GradeSummary(row.value2(), row.value3(), row.value4(),
+                        temperatures.getOrDefault(row.value1(), List.of()), curveCounts.getOrDefault(row.value1(), 0))));
+        return grades;
+    }
+
+    /** The names of the families, alphabetically. */
+    public List<String> families() {
+        return dsl.select(MATERIAL_FAMILY.NAME).from(MATERIAL_FAMILY).orderBy(MATERIAL_FAMILY.NAME).fetch(MATERIAL_FAMILY.NAME);
+    }
+
+    public Optional<GradeInfo> grade(String name) {
+        return gradeRows(GRADE.NAME.eq(name)).stream().findFirst();
+    }
+
+    private List<GradeInfo> gradeRows(Condition condition) {
+        return dsl.select(GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER, GRADE.DENSITY, GRADE.NOTES, GRADE.PROVENANCE)
+                .from(GRADE).join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
+                .where(condition).orderBy(GRADE.NAME)
+                .fetch(row -> new GradeInfo(row.value1(), row.value2(), row.value3(), row.value4(), row.value5(), row.value6()));
+    }
+
+    /** The curves of a grade, by temperature and kind, with their points in stored order. */
+    public List<LibraryCurve> curves(String grade) {
+        return curveRows(GRADE.NAME.eq(grade));
+    }
+
+    private List<LibraryCurve> curveRows(Condition condition) {
+        var rows = dsl.select(CURVE.ID, GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.QUANTITY, CURVE.SOURCE,
+                        CURVE.POINT_COUNT, IMPORT_RECORD.SHA256)
+                .from(CURVE).join(GRADE).on(CURVE.GRADE_ID.eq(GRADE.ID))
+                .leftJoin(IMPORT_RECORD).on(CURVE.IMPORT_ID.eq(IMPORT_RECORD.ID))
+                .where(condition).orderBy(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.ID).fetch();
+        Map<Long, double[][]> points = new LinkedHashMap<>();
+        for (var row : rows) {
+            points.put(row.value1(), new double[][] {new double[row.value7()], new double[row.value7()]});
+        }
+        if (!points.isEmpty()) {
+            dsl.select(CURVE_POINT.CURVE_ID, CURVE_POINT.ORDINAL, CURVE_POINT.H, CURVE_POINT.MEASURED).from(CURVE_POINT)
+                    .join(CURVE).on(CURVE_POINT.CURVE_ID.eq(CURVE.ID)).join(GRADE).on(CURVE.GRADE_ID.eq(GRADE.ID))
+                    .where(condition)
+                    .orderBy(CURVE_POINT.CURVE_ID, CURVE_POINT.ORDINAL)
+                    .forEach(point -> {
+                        double[][] columns = points.get(point.value1());
+                        columns[0][point.value2()] = point.value3();
+                        columns[1][point.value2()] = point.value4();
+                    });
+        }
+        List<LibraryCurve> curves = new ArrayList<>();
+        for (var row : rows) {
+            double[][] columns = points.get(row.value1());
+            CurveKind kind = CurveKind.valueOf(row.value4().toUpperCase(Locale.ROOT));
+            DemagnetizationCurve curve = new DemagnetizationCurve(kind, Quantity.valueOf(row.value5()), columns[0], columns[1], row.value3());
+            curves.add(new LibraryCurve(row.value2(), curve, row.value6(), row.value8()));
+        }
+        return curves;
+    }
+
+    public Optional<ImportInfo> importWithChecksum(String sha256) {
+        return imports(IMPORT_RECORD.SHA256.eq(sha256)).stream().findFirst();
+    }
+
+    private List<ImportInfo> imports(Condition condition) {
+        return dsl.selectFrom(IMPORT_RECORD).where(condition).orderBy(IMPORT_RECORD.IMPORTED_AT, IMPORT_RECORD.SHA256)
+                .fetch(row -> new ImportInfo(row.getFileName(), row.getSha256(), row.getImportedAt().toInstant(),
+                        row.getCurveCount(), row.getPointCount(), row.getSusceptibilityCount()));
+    }
+
+    /** Susceptibility points of one material (or all when null), by material and temperature. */
+    public List<SusceptibilityPoint> susceptibility(String material) {
+        Condition condition = material == null ? DSL.noCondition() : SUSCEPTIBILITY_POINT.MATERIAL.eq(material);
+        return dsl.select(SUSCEPTIBILITY_POINT.asterisk(), IMPORT_RECORD.SHA256).from(SUSCEPTIBILITY_POINT)
+                .leftJoin(IMPORT_RECORD).on(SUSCEPTIBILITY_POINT.IMPORT_ID.eq(IMPORT_RECORD.ID))
+                .where(condition)
+                .orderBy(SUSCEPTIBILITY_POINT.MATERIAL, SUSCEPTIBILITY_POINT.TEMPERATURE_K, SUSCEPTIBILITY_POINT.ID)
+                .fetch(row -> new SusceptibilityPoint(row.get(SUSCEPTIBILITY_POINT.MATERIAL), row.get(SUSCEPTIBILITY_POINT.TEMPERATURE_K),
+                        row.get(SUSCEPTIBILITY_POINT.CHI), SusceptibilityForm.valueOf(row.get(SUSCEPTIBILITY_POINT.FORM).toUpperCase(Locale.ROOT)),
+                        row.get(SUSCEPTIBILITY_POINT.DENSITY), row.get(SUSCEPTIBILITY_POINT.MOLAR_MASS),
+                        row.get(SUSCEPTIBILITY_POINT.SOURCE), row.get(IMPORT_RECORD.SHA256)));
+    }
+
+    /** Fits, by time. */
+    public List<FitRecord> fits() {
+        return dsl.select(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, FIT.MATERIAL, FIT.MODEL, FIT.PARAMETERS, FIT.RESIDUAL,
+                        FIT.FITTED_AT, FIT.PROGRAM_VERSION)
+                .from(FIT).leftJoin(GRADE).on(FIT.GRADE_ID.eq(GRADE.ID)).leftJoin(CURVE).on(FIT.CURVE_ID.eq(CURVE.ID))
+                .orderBy(FIT.FITTED_AT, FIT.ID)
+                .fetch(row -> new FitRecord(row.value1(), row.value2(), row.value3(), row.value4(), row.value5(), row.value6(),
+                        row.value7(), row.value8().toInstant(), row.value9()));
+    }
+
+    /** Everything, in the fixed order of {@link LibrarySnapshot}. */
+    public LibrarySnapshot snapshot() {
+        return new LibrarySnapshot(imports(DSL.noCondition()), gradeRows(DSL.noCondition()), curveRows(DSL.noCondition()),
+                susceptibility(null), fits());
+    }
+
+    public boolean isEmpty() {
+        return rowCounts().values().stream().allMatch(count -> count == 0);
+    }
+
+    /** Row count of every table, for checks that a failed write left nothing behind. */
+    public Map<String, Integer> rowCounts() {
+        Map<String, Integer> counts = new LinkedHashMap<>();
+        for (Table<? extends Record> table : List.of(IMPORT_RECORD, MATERIAL_FAMILY, GRADE, CURVE, CURVE_POINT, SUSCEPTIBILITY_POINT, FIT)) {
+            counts.put(table.getName(), dsl.fetchCount(table));
+        }
+        return counts;
+    }
+}

@@ -1,0 +1,96 @@
+package org.kneepoint.db;
+
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.locks.ReentrantLock;
+import org.jooq.DSLContext;
+import org.jooq.impl.DSL;
+import org.kneepoint.fitter.error.ConflictException;
+import org.kneepoint.fitter.library.FitRecord;
+import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.ImportInfo;
+import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.fitter.library.LibrarySnapshot;
+import org.kneepoint.fitter.library.SusceptibilityPoint;
+
+/**
+ * Writes to the library, each call one transaction: an import batch, a restore, a fit. Writers of
+ * one {@link Library} take turns (a lock), so concurrent imports never interleave their rows.
+ */
+public final class LibraryWriter {
+
+    private final DSLContext dsl;
+    private final ReentrantLock turn;
+
+    LibraryWriter(DSLContext dsl, ReentrantLock turn) {
+        this.dsl = dsl;
+        this.turn = turn;
+    }
+
+    /** Stores one import: its record, new grades, curves and susceptibility points. Nothing is written on any error. */
+    public void importBatch(ImportInfo info, List<GradeInfo> grades, List<LibraryCurve> curves, List<SusceptibilityPoint> points) {
+        inTransaction(rows -> {
+            if (rows.importId(info.sha256()) != null) {
+                throw new ConflictException("the file " + info.fileName() + " was already imported (same SHA-256)");
+            }
+            long importId = rows.insertImport(info);
+            Map<String, Long> gradeIds = new java.util.HashMap<>();
+            for (GradeInfo grade : grades) {
+                gradeIds.put(grade.name(), rows.ensureGrade(grade));
+            }
+            for (LibraryCurve curve : curves) {
+                rows.insertCurve(requireGrade(gradeIds, curve.grade()), curve, importId);
+            }
+            for (SusceptibilityPoint point : points) {
+                rows.insertSusceptibility(point, importId);
+            }
+        });
+    }
+
+    /** Restores a backup into an empty library. */
+    public void restore(LibrarySnapshot snapshot) {
+        inTransaction(rows -> {
+            if (!rows.libraryIsEmpty()) {
+                throw new ConflictException("the library is not empty; restore needs an empty database");
+            }
+            for (ImportInfo info : snapshot.imports()) {
+                rows.insertImport(info);
+            }
+            Map<String, Long> gradeIds = new java.util.HashMap<>();
+            for (GradeInfo grade : snapshot.grades()) {
+                gradeIds.put(grade.name(), rows.ensureGrade(grade));
+            }
+            for (LibraryCurve curve : snapshot.curves()) {
+                rows.insertCurve(requireGrade(gradeIds, curve.grade()), curve, rows.importId(curve.importSha256()));
+            }
+            for (SusceptibilityPoint point : snapshot.susceptibility()) {
+                rows.insertSusceptibility(point, rows.importId(point.importSha256()));
+            }
+            for (FitRecord fit : snapshot.fits()) {
+                rows.insertFit(fit);
+            }
+        });
+    }
+
+    /** Stores a fit with the grade, curve or material it came from. */
+    public void saveFit(FitRecord fit) {
+        inTransaction(rows -> rows.insertFit(fit));
+    }
+
+    private static long requireGrade(Map<String, Long> gradeIds, String grade) {
+        Long id = gradeIds.get(grade);
+        if (id == null) {
+            throw new IllegalArgumentException("curve of grade '" + grade + "' comes without its grade");
+        }
+        return id;
+    }
+
+    private void inTransaction(java.util.function.Consumer<RowWriter> work) {
+        turn.lock();
+        try {
+            dsl.transaction(configuration -> work.accept(new RowWriter(DSL.using(configuration))));
+        } finally {
+            turn.unlock();
+        }
+    }
+}
