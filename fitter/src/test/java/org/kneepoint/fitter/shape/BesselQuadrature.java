@@ -7,13 +7,16 @@ import org.apache.commons.math3.special.BesselJ;
 /**
  * Test-only reference integrals over Bessel functions (Apache Commons Math 3.6.1 BesselJ and
  * IterativeLegendreGaussIntegrator), panel by panel of length π up to where the exponential
- * damping has made the rest negligible.
+ * damping has made the rest negligible. A fresh integrator per call, because the integrator keeps
+ * state and nested integrals would share it.
  */
 final class BesselQuadrature {
 
-    private static final IterativeLegendreGaussIntegrator INTEGRATOR = new IterativeLegendreGaussIntegrator(20, 1e-13, 1e-16);
-
     private BesselQuadrature() {
+    }
+
+    private static IterativeLegendreGaussIntegrator integrator() {
+        return new IterativeLegendreGaussIntegrator(20, 1e-13, 1e-16);
     }
 
     static double j1(double x) {
@@ -25,7 +28,7 @@ final class BesselQuadrature {
         double upper = 40.0 / damping;
         double sum = 0.0;
         for (double lower = 0.0; lower < upper; lower += Math.PI) {
-            sum += INTEGRATOR.integrate(Integer.MAX_VALUE, x -> f.applyAsDouble(x) * Math.exp(-damping * x), lower,
+            sum += integrator().integrate(Integer.MAX_VALUE, x -> f.applyAsDouble(x) * Math.exp(-damping * x), lower,
                     lower + Math.PI);
         }
         return sum;
@@ -33,6 +36,6 @@ final class BesselQuadrature {
 
     /** ∫ f over [lower, upper] with the adaptive Gauss–Legendre rule. */
     static double integrate(DoubleUnaryOperator f, double lower, double upper) {
-        return INTEGRATOR.integrate(Integer.MAX_VALUE, f::applyAsDouble, lower, upper);
+        return integrator().integrate(Integer.MAX_VALUE, f::applyAsDouble, lower, upper);
     }
 }
