@@ -16,6 +16,20 @@ final class Dimension {
         return value;
     }
 
+    /** Throws BadInputException unless ratio ≥ lower. */
+    static void ratioAtLeast(String ratioName, double ratio, double lower) {
+        if (!(ratio >= lower)) {
+            throw new BadInputException(ratioName + " must be at least " + lower + " (where the formulas keep their accuracy), got " + ratio);
+        }
+    }
+
+    /** Throws BadInputException unless ratio ≤ upper. */
+    static void ratioAtMost(String ratioName, double ratio, double upper) {
+        if (!(ratio <= upper)) {
+            throw new BadInputException(ratioName + " must be at most " + upper + " (where the formulas keep their accuracy), got " + ratio);
+        }
+    }
+
     /** Throws BadInputException unless lower ≤ ratio ≤ upper. */
     static void ratioWithin(String ratioName, double ratio, double lower, double upper) {
         if (!(ratio >= lower && ratio <= upper)) {

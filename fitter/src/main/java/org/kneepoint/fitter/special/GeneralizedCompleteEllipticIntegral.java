@@ -23,7 +23,7 @@ public final class GeneralizedCompleteEllipticIntegral {
      * cel(kc, p, c, s).
      *
      * @param kc complementary modulus, finite and non-zero (kc² = 1 − m)
-     * @param p  finite and non-zero
+     * @param p  finite; zero only together with s = 0 (otherwise the integral diverges)
      * @param c  finite
      * @param s  finite
      * @return the integral
@@ -32,8 +32,8 @@ public final class GeneralizedCompleteEllipticIntegral {
         if (kc == 0.0 || !Double.isFinite(kc)) {
             throw new BadInputException("cel: complementary modulus kc must be finite and non-zero, got " + kc);
         }
-        if (p == 0.0 || !Double.isFinite(p) || !Double.isFinite(c) || !Double.isFinite(s)) {
-            throw new BadInputException("cel: p must be finite and non-zero and c, s finite, got p = " + p
+        if ((p == 0.0 && s != 0.0) || !Double.isFinite(p) || !Double.isFinite(c) || !Double.isFinite(s)) {
+            throw new BadInputException("cel: p, c, s must be finite and p non-zero unless s = 0, got p = " + p
                     + ", c = " + c + ", s = " + s);
         }
         return unchecked(kc, p, c, s);
