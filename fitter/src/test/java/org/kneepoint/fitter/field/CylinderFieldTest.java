@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -82,6 +83,15 @@ class CylinderFieldTest {
         }
         assertTrue(ring.isInside(0.35, 0.1, 0.05));
         assertTrue(!ring.isInside(0, 0, 0));
+    }
+
+    @Test
+    void mid_plane_average_of_the_field_gives_the_closed_form_fluxmetric_factor() {
+        // Nf = 1 − ⟨Bz⟩/Br over the mid-plane disc (definition, Chen, Brug, Goldfarb 1991) from the Derby–Olbert field,
+        // against the closed form derived in CylinderDemagnetization; Commons Math Gauss–Legendre
+        double average = new IterativeLegendreGaussIntegrator(16, 1e-12, 1e-15).integrate(Integer.MAX_VALUE,
+                rho -> 2 * rho * field.fluxDensity(rho, 0, 0).z(), 0, 0.5) / (0.25 * BR);
+        assertEquals(1 - average, cylinder.demagnetizingFactors().fluxmetric(), 1e-10);
     }
 
     @Test

@@ -12,12 +12,9 @@ class GeneralizedCompleteEllipticIntegralTest {
         // definition of cel, R. Bulirsch, Numer. Math. 13, 305–315 (1969); outside quadrature:
         // Apache Commons Math 3.6.1 IterativeLegendreGaussIntegrator
         double[][] cases = {{0.3, 1.0, 1.0, -1.0}, {0.8, 0.25, 1.0, 0.5}, {0.05, 4.0, 1.0, -2.0}, {1.7, 0.01, 1.0, 0.1},
-            {0.6, -0.5, 2.0, 0.3}};
+            {0.6, 0.0, 1.0, 0.0}};
         IterativeLegendreGaussIntegrator integrator = new IterativeLegendreGaussIntegrator(24, 1e-14, 1e-15);
         for (double[] c : cases) {
-            if (c[1] < 0) {
-                continue;
-            }
             double expected = integrator.integrate(1_000_000, phi -> {
                 double cos2 = Math.cos(phi) * Math.cos(phi);
                 double sin2 = 1 - cos2;
