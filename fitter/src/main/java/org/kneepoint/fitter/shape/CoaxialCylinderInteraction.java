@@ -10,9 +10,9 @@ import org.kneepoint.fitter.special.GeneralizedCompleteEllipticIntegral;
  * W = μ0·M²·Q(L) with Q(L) = [U(0) − U(L)]/(2π), and the flux of one cylinder's demagnetizing field
  * through the other's mid-plane disc is M·Q'(L/2). In Fourier–Bessel form
  * Q(L) = 2π·a·c·∫ J1(ka)·J1(kc)·(1 − e^{−kL})/k² dk, so Q'' is −2 times the mutual inductance per μ0 of
- * two coaxial loops, m(t) = √(ac)·k·cel(kc, 1, −1, 1), k² = 4ac/((a + c)² + t²) (Maxwell's formula,
- * e.g. W. R. Smythe, Static and Dynamic Electricity, §7.10, written with Bulirsch's cel), and with
- * Q(0) = 0, Q'(0) = π·c² (Weber–Schafheitlin integral):
+ * two coaxial loops, m(t) = √(ac)·k·cel(kc, 1, −1, 1), k² = 4ac/((a + c)² + t²) (Maxwell's formula for
+ * coaxial circles, μ0·√(ac)·[(2/k − k)·K − (2/k)·E], from memory, written with Bulirsch's cel), and with
+ * Q(0) = 0, Q'(0) = π·c² (Weber–Schafheitlin integral ∫ J1(ka)·J1(kc)/k dk = c/(2a), from memory):
  * Q(L) = π·c²·L − 2∫₀^L (L − t)·m(t) dt, Q'(h) = π·c² − 2∫₀^h m(t) dt.
  * The integrals are taken by 16-point Gauss–Legendre on panels that double in width from (a − c)/2,
  * which resolves the logarithmic near-singularity at t = 0 when c is close to a.

@@ -14,8 +14,9 @@ import org.kneepoint.fitter.special.CompleteEllipticIntegral;
  * <li>Nf = 1 − (4/π)·g·√(1+g²)·(K − E), g = γ/2, m = 1/(1 + g²): derived here. With U(d) the
  * Coulomb integral ∬dA dA'/r between two coaxial end discs a distance d apart, Nm(γ) =
  * [U(0) − U(L)]/(2π·A·L) and the mid-plane average of the face solid angle is −U'(L/2)/A, so
- * Nf(γ) = d/dg [g·Nm(g)] at g = γ/2; differentiating the closed form with dK/dm, dE/dm
- * (NIST DLMF 19.4.1) gives the expression above, exact and closed.</li>
+ * Nf(γ) = d/dg [g·Nm(g)] at g = γ/2; differentiating the closed form with the derivatives of K
+ * and E (NIST DLMF 19.4.1) gives the expression above, exact and closed. The tests check it against
+ * a Fourier–Bessel quadrature and the mid-plane average of the Derby–Olbert field.</li>
  * <li>N0 = 1 − γ/√(γ² + 1): the field of the two end discs at the centre, each subtending
  * 2π·(1 − (L/2)/√(R² + (L/2)²)) (solid angle of a disc on its axis).</li>
  * </ul>
