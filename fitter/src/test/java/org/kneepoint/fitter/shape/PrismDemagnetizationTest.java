@@ -41,7 +41,7 @@ class PrismDemagnetizationTest {
     void fluxmetric_matches_quadrature_of_the_face_solid_angle_over_the_mid_plane() {
         // Nf = mean over the mid-plane of the solid angle of the two faces / (4π) each (definition, Chen, Brug, Goldfarb
         // 1991); rectangle solid angle Σ ±atan(uv/(h·r)) (REFERENCES §4a); Commons Math adaptive Gauss–Legendre
-        double[][] cases = {{1, 1, 1}, {1, 2, 3}, {0.5, 0.5, 5}, {5, 5, 0.5}, {3, 0.7, 1.1}};
+        double[][] cases = {{1, 1, 1}, {1, 2, 3}, {0.5, 0.5, 5}, {5, 5, 0.5}, {3, 0.7, 1.1}, {0.5, 0.5, 50}, {50, 50, 0.5}, {50, 0.5, 5}};
         for (double[] e : cases) {
             double a = e[0];
             double b = e[1];
@@ -49,7 +49,9 @@ class PrismDemagnetizationTest {
             double integral = BesselQuadrature.integrate(x -> BesselQuadrature.integrate(y -> rectangleSolidAngle(a, b, x, y, h), 0, b),
                     0, a);
             double expected = integral / (a * b) / (2 * Math.PI);
-            assertEquals(expected, PrismDemagnetization.fluxmetric(a, b, h), 1e-9 * expected, "half edges " + a + ", " + b + ", " + h);
+            // edge ratios of 100 cost the closed form digits to cancellation: 1e-8 there (BlockShape), 1e-10 elsewhere
+            double tolerance = Math.max(a, h) / Math.min(a, h) >= 100 ? 1e-8 : 1e-10;
+            assertEquals(expected, PrismDemagnetization.fluxmetric(a, b, h), tolerance * expected, "half edges " + a + ", " + b + ", " + h);
         }
     }
 
