@@ -2,10 +2,12 @@ package org.kneepoint.fitter.shape;
 
 /**
  * A rectangular block centred at the origin with edges along x (width), y (depth) and z
- * (thickness), magnetized along z. Factors: {@link PrismDemagnetization} (Nm by Aharoni,
- * J. Appl. Phys. 83, 3432, 1998). Every ratio of two edges must lie between 1/{@value #MAX_EDGE_RATIO}
- * and {@value #MAX_EDGE_RATIO}; at those extremes the closed forms lose digits to cancellation but
- * stay accurate to about 1e-8 relative.
+ * (thickness), magnetized along z. All three factors in closed form: Nm by Aharoni (J. Appl. Phys. 83,
+ * 3432, 1998, Eq. 1), Nf from the double antiderivative of the face-to-mid-plane solid angle (derived
+ * here), N0 = (2/π)·atan(ab/(c·√(a² + b² + c²))) with half edges a, b, c. Every ratio of two edges
+ * must lie between 1/{@value #MAX_EDGE_RATIO} and {@value #MAX_EDGE_RATIO}; at those extremes the
+ * closed forms lose digits to cancellation but stay accurate to about 1e-8 relative (1e-10 or better
+ * for ratios up to 10).
  *
  * @param width     along x, in metres
  * @param depth     along y, in metres

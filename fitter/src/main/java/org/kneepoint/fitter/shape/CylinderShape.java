@@ -1,8 +1,10 @@
 package org.kneepoint.fitter.shape;
 
 /**
- * A solid right circular cylinder magnetized along its axis (z), centred at the origin.
- * Factors: {@link CylinderDemagnetization} (Chen, Brug, Goldfarb, IEEE Trans. Magn. 27, 3601, 1991).
+ * A solid right circular cylinder magnetized along its axis (z), centred at the origin. All three
+ * factors in closed form with γ = L/D: Nm exact with K and E (Chen, Brug, Goldfarb, IEEE Trans. Magn.
+ * 27, 3601, 1991; Beleggia et al., J. Phys. D 38, 3333, 2005), Nf = d/dg[g·Nm(g)] at g = γ/2 in closed
+ * form (derived here from the energy of the end discs), N0 = 1 − γ/√(γ² + 1).
  * Accepted aspect ratio L/D: {@value #MIN_ASPECT} to {@value #MAX_ASPECT}; within it the three
  * factors are accurate to about 1e-10 relative or better.
  *

@@ -3,10 +3,10 @@ package org.kneepoint.fitter.shape;
 /**
  * A ring (hollow cylinder) magnetized along its axis z, centred at the origin. Built by
  * superposition: the ring is an outer cylinder of magnetization M plus an inner one of −M. With
- * Va, Vc the two volumes and Q the mutual terms of {@link CoaxialCylinderInteraction}:
+ * Va, Vc the two volumes and Q the mutual terms of CoaxialCylinderInteraction:
  * Nm·V = Nm(a)·Va + Nm(c)·Vc − 2·Q(L); Nf·A = Nf(a)·Aa + Nf(c)·Ac − 2·Q'(L/2) over the annulus A;
  * both follow from the energy and the mid-plane flux of the face charges (derived here; cylinder
- * factors from {@link CylinderDemagnetization}, Chen, Brug, Goldfarb 1991). The geometric centre
+ * factors from the closed forms of CylinderDemagnetization, Chen, Brug, Goldfarb 1991). The geometric centre
  * lies in the bore, so N0 is taken on the mid-plane at the mean radius (a + c)/2, from the
  * Derby–Olbert field (Am. J. Phys. 78, 229, 2010). Accepted: inner/outer diameter
  * {@value #MIN_BORE_RATIO} to {@value #MAX_BORE_RATIO}, length/outer diameter at least
