@@ -19,13 +19,13 @@ public record BlockShape(double width, double depth, double thickness) implement
     public static final double MAX_EDGE_RATIO = 100.0;
 
     public BlockShape {
-        Dimension.positiveLength("width", width);
-        Dimension.positiveLength("depth", depth);
-        Dimension.positiveLength("thickness", thickness);
+        SizeChecks.positiveLength("width", width);
+        SizeChecks.positiveLength("depth", depth);
+        SizeChecks.positiveLength("thickness", thickness);
         double lower = 1.0 / MAX_EDGE_RATIO;
-        Dimension.ratioWithin("block width/thickness", width / thickness, lower, MAX_EDGE_RATIO);
-        Dimension.ratioWithin("block depth/thickness", depth / thickness, lower, MAX_EDGE_RATIO);
-        Dimension.ratioWithin("block width/depth", width / depth, lower, MAX_EDGE_RATIO);
+        SizeChecks.ratioWithin("block width/thickness", width / thickness, lower, MAX_EDGE_RATIO);
+        SizeChecks.ratioWithin("block depth/thickness", depth / thickness, lower, MAX_EDGE_RATIO);
+        SizeChecks.ratioWithin("block width/depth", width / depth, lower, MAX_EDGE_RATIO);
     }
 
     @Override

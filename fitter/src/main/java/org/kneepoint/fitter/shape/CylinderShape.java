@@ -19,9 +19,9 @@ public record CylinderShape(double diameter, double length) implements FlatPoleS
     public static final double MAX_ASPECT = 1e3;
 
     public CylinderShape {
-        Dimension.positiveLength("diameter", diameter);
-        Dimension.positiveLength("length", length);
-        Dimension.ratioWithin("cylinder length/diameter", length / diameter, MIN_ASPECT, MAX_ASPECT);
+        SizeChecks.positiveLength("diameter", diameter);
+        SizeChecks.positiveLength("length", length);
+        SizeChecks.ratioWithin("cylinder length/diameter", length / diameter, MIN_ASPECT, MAX_ASPECT);
     }
 
     /** Radius in metres. */

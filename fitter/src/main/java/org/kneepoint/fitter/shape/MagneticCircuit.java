@@ -21,8 +21,8 @@ public record MagneticCircuit(double magnetLength, double magnetArea, double gap
         double reluctanceFactor) implements MagnetShape {
 
     public MagneticCircuit {
-        Dimension.positiveLength("magnet length", magnetLength);
-        Dimension.positiveLength("gap length", gapLength);
+        SizeChecks.positiveLength("magnet length", magnetLength);
+        SizeChecks.positiveLength("gap length", gapLength);
         positiveArea("magnet area", magnetArea);
         positiveArea("gap area", gapArea);
         atLeastOne("leakage factor", leakageFactor);

@@ -24,12 +24,12 @@ public record RingShape(double outerDiameter, double innerDiameter, double lengt
     public static final double MAX_BORE_RATIO = 0.99;
 
     public RingShape {
-        Dimension.positiveLength("outer diameter", outerDiameter);
-        Dimension.positiveLength("inner diameter", innerDiameter);
-        Dimension.positiveLength("length", length);
-        Dimension.ratioWithin("ring inner/outer diameter", innerDiameter / outerDiameter, MIN_BORE_RATIO, MAX_BORE_RATIO);
-        Dimension.ratioAtLeast("ring length/outer diameter", length / outerDiameter, CylinderShape.MIN_ASPECT);
-        Dimension.ratioAtMost("ring length/inner diameter", length / innerDiameter, CylinderShape.MAX_ASPECT);
+        SizeChecks.positiveLength("outer diameter", outerDiameter);
+        SizeChecks.positiveLength("inner diameter", innerDiameter);
+        SizeChecks.positiveLength("length", length);
+        SizeChecks.ratioWithin("ring inner/outer diameter", innerDiameter / outerDiameter, MIN_BORE_RATIO, MAX_BORE_RATIO);
+        SizeChecks.ratioAtLeast("ring length/outer diameter", length / outerDiameter, CylinderShape.MIN_ASPECT);
+        SizeChecks.ratioAtMost("ring length/inner diameter", length / innerDiameter, CylinderShape.MAX_ASPECT);
     }
 
     @Override

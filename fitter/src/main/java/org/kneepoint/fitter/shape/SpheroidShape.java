@@ -24,9 +24,9 @@ public record SpheroidShape(double equatorialDiameter, double polarDiameter) imp
     private static final double SERIES_LIMIT = 1e-2;
 
     public SpheroidShape {
-        Dimension.positiveLength("equatorial diameter", equatorialDiameter);
-        Dimension.positiveLength("polar diameter", polarDiameter);
-        Dimension.ratioWithin("spheroid polar/equatorial diameter", polarDiameter / equatorialDiameter, MIN_RATIO, MAX_RATIO);
+        SizeChecks.positiveLength("equatorial diameter", equatorialDiameter);
+        SizeChecks.positiveLength("polar diameter", polarDiameter);
+        SizeChecks.ratioWithin("spheroid polar/equatorial diameter", polarDiameter / equatorialDiameter, MIN_RATIO, MAX_RATIO);
     }
 
     /** A sphere of the given diameter. */

@@ -3,9 +3,9 @@ package org.kneepoint.fitter.shape;
 import org.kneepoint.fitter.error.BadInputException;
 
 /** Checks of the sizes given to a shape, with messages that say what was expected. */
-final class Dimension {
+final class SizeChecks {
 
-    private Dimension() {
+    private SizeChecks() {
     }
 
     /** Returns the length if it is positive and finite, else throws BadInputException. */
