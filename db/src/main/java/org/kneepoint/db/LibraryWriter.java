@@ -8,6 +8,7 @@ import org.jooq.impl.DSL;
 import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.fitter.library.FitRecord;
 import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.ImportBatch;
 import org.kneepoint.fitter.library.ImportInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.fitter.library.LibrarySnapshot;
@@ -29,22 +30,34 @@ public final class LibraryWriter {
 
     /** Stores one import: its record, new grades, curves and susceptibility points. Nothing is written on any error. */
     public void importBatch(ImportInfo info, List<GradeInfo> grades, List<LibraryCurve> curves, List<SusceptibilityPoint> points) {
+        importBatches(List.of(new ImportBatch(info, grades, curves, points)));
+    }
+
+    /** Stores several imports in one transaction: all of them, or on any error none. */
+    public void importBatches(List<ImportBatch> batches) {
         inTransaction(rows -> {
-            if (rows.importId(info.sha256()) != null) {
-                throw new ConflictException("the file " + info.fileName() + " was already imported (same SHA-256)");
-            }
-            long importId = rows.insertImport(info);
-            Map<String, Long> gradeIds = new java.util.HashMap<>();
-            for (GradeInfo grade : grades) {
-                gradeIds.put(grade.name(), rows.ensureGrade(grade));
-            }
-            for (LibraryCurve curve : curves) {
-                rows.insertCurve(requireGrade(gradeIds, curve.grade()), curve, importId);
-            }
-            for (SusceptibilityPoint point : points) {
-                rows.insertSusceptibility(point, importId);
+            for (ImportBatch batch : batches) {
+                writeBatch(rows, batch);
             }
         });
+    }
+
+    private static void writeBatch(RowWriter rows, ImportBatch batch) {
+        ImportInfo info = batch.info();
+        if (rows.importId(info.sha256()) != null) {
+            throw new ConflictException("the file " + info.fileName() + " was already imported (same SHA-256)");
+        }
+        long importId = rows.insertImport(info);
+        Map<String, Long> gradeIds = new java.util.HashMap<>();
+        for (GradeInfo grade : batch.grades()) {
+            gradeIds.put(grade.name(), rows.ensureGrade(grade));
+        }
+        for (LibraryCurve curve : batch.curves()) {
+            rows.insertCurve(requireGrade(gradeIds, curve.grade()), curve, importId);
+        }
+        for (SusceptibilityPoint point : batch.susceptibility()) {
+            rows.insertSusceptibility(point, importId);
+        }
     }
 
     /** Restores a backup into an empty library. */

@@ -42,8 +42,13 @@ public final class CurveFileReader {
         return collector.result();
     }
 
+    /** A fresh collector, for readers of other layouts (JSON) that feed the same parts. */
+    public static CurveTableCollector collector(String source) {
+        return new Collector(source);
+    }
+
     /** Collects one file's metadata and points while it is scanned. */
-    private static final class Collector implements TableHandler {
+    private static final class Collector implements CurveTableCollector {
         private final String source;
         private final MetadataCollector metadata;
         private final Map<Double, PointColumns> groups = new LinkedHashMap<>();
@@ -89,7 +94,8 @@ public final class CurveFileReader {
             return TableNumbers.si(source, line, column, cells[column], layout.headers()[column], delimiter);
         }
 
-        CurveFile result() {
+        @Override
+        public CurveFile result() {
             CurveMetadata meta = new CurveMetadata(metadata.text("grade"), metadata.text("family"), metadata.text("supplier"),
                     metadata.quantity("temperature", Dimension.TEMPERATURE), metadata.choice("kind", CurveMetadata.KINDS),
                     metadata.text("source"), metadata.text("notes"));

@@ -4,7 +4,7 @@ package org.kneepoint.importer.csv;
  * The column separator of a table, told from its header row: tab, then semicolon, then comma.
  * With tabs or semicolons a comma inside a number is a decimal comma.
  */
-enum Delimiter {
+public enum Delimiter {
     TAB('\t', "tab"),
     SEMICOLON(';', "semicolon"),
     COMMA(',', "comma");

@@ -9,7 +9,7 @@ import java.util.regex.Pattern;
  * comment; one whose key is not one of {@link CurveMetadata#KEYS} is refused, so a typing mistake
  * such as {@code # temprature: 20 °C} cannot pass silently.
  */
-record MetadataLine(String key, String value) {
+public record MetadataLine(String key, String value) {
 
     private static final Pattern KEY_VALUE = Pattern.compile("#\\s*([A-Za-z][A-Za-z_-]*)\\s*:(.*)");
 

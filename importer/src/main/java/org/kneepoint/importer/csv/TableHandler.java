@@ -1,7 +1,7 @@
 package org.kneepoint.importer.csv;
 
 /** What a reader does with the parts of a delimited table as {@link TableScanner} meets them. */
-interface TableHandler {
+public interface TableHandler {
 
     /** A {@code # key: value} line before the header. */
     void metadata(MetadataLine entry, int line);
