@@ -16,7 +16,7 @@ import org.kneepoint.fitter.error.NumericalFailureException;
 public final class AdaptiveBranchSolver implements BranchSolver {
 
     /** Local tolerance giving about 1e-6 relative accuracy in Hc and Mr of a major loop. */
-    public static final double DEFAULT_TOLERANCE = 1e-8;
+    public static final double DEFAULT_TOLERANCE = 1e-9;
 
     private static final long MAXIMUM_STEPS = 10_000_000L;
 

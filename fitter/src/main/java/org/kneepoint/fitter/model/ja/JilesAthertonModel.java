@@ -62,10 +62,12 @@ public final class JilesAthertonModel {
         } else {
             double e = Math.exp(-2 * ax);
             double oneMinus = 1 - e;
-            double inverseAx = 1 / ax;
-            double magnitude = (1 + e) / oneMinus - inverseAx;
+            double shared = 1 / (ax * oneMinus);
+            double inverseAx = oneMinus * shared;
+            double inverseOneMinus = ax * shared;
+            double magnitude = (1 + e) * inverseOneMinus - inverseAx;
             langevin = x < 0 ? -magnitude : magnitude;
-            slope = inverseAx * inverseAx - 4 * e / (oneMinus * oneMinus);
+            slope = inverseAx * inverseAx - 4 * e * inverseOneMinus * inverseOneMinus;
         }
         double gap = ms * langevin - m;
         double drive = direction * gap;
