@@ -10,15 +10,23 @@ final class FitParameterization {
 
     /** Values of c and u are kept this far inside (0, 1) when mapped to q. */
     private static final double MARGIN = 1e-6;
+    private static final double LOG_LOWEST = Math.log(1e-9);
+    private static final double LOG_HIGHEST = Math.log(1e12);
 
     private FitParameterization() {
     }
 
     static JilesAthertonParameters toParameters(double[] q) {
-        double ms = Math.exp(q[0]);
-        double a = Math.exp(q[1]);
+        double ms = Math.exp(bounded(q[0]));
+        double a = Math.exp(bounded(q[1]));
         double u = logistic(q[4]);
-        return new JilesAthertonParameters(ms, a, Math.exp(q[2]), logistic(q[3]), Math.min(u, 1 - 1e-12) * 3 * a / ms);
+        return new JilesAthertonParameters(ms, a, Math.exp(bounded(q[2])), logistic(q[3]),
+                Math.min(u, 1 - 1e-12) * 3 * a / ms);
+    }
+
+    /** Keeps a logarithm within 1e-9 to 1e12 A/m, so a wild optimizer step stays finite. */
+    private static double bounded(double logarithm) {
+        return Math.min(Math.max(logarithm, LOG_LOWEST), LOG_HIGHEST);
     }
 
     static double[] toCoordinates(JilesAthertonParameters p) {

@@ -8,6 +8,9 @@ package org.kneepoint.fitter.model.ja;
  */
 final class LoopResidual {
 
+    /** B, tesla, put in place of a non-finite model value, so such parameters score as a very poor fit. */
+    private static final double OUT_OF_RANGE = 1e3;
+
     private final FixedStepLoopEvaluator evaluator;
     private final double[] measured;
     private int evaluations;
@@ -41,6 +44,9 @@ final class LoopResidual {
         double[] b = evaluator.fluxDensity(new JilesAthertonModel(FitParameterization.toParameters(q)));
         double sum = 0;
         for (int i = 0; i < b.length; i++) {
+            if (!Double.isFinite(b[i])) {
+                b[i] = OUT_OF_RANGE;
+            }
             double r = b[i] - measured[i];
             sum += r * r;
         }

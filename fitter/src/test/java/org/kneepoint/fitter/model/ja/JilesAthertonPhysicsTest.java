@@ -105,4 +105,17 @@ class JilesAthertonPhysicsTest {
         assertTrue(metrics.hcb() > 0 && metrics.hcb() < metrics.hc());
         assertEquals(MagneticConstant.MU0 * (5000 + metrics.mMax()), metrics.bMax(), 1e-15);
     }
+
+    // Recoil (DESIGN §4, linear-recoil picture; Jiles & Atherton 1986 for the model): after a partial reversal
+    // to H1 < 0 on the falling major branch, returning to H = 0 recovers only part of the remanence.
+    @Test
+    void recoil_from_the_second_quadrant_loses_remanence_irreversibly() {
+        double hMax = 5000;
+        double[] m = HysteresisSimulator.adaptive(SOFT_IRON).simulate(new double[] {hMax, 0, -250, 0}).magnetization();
+        double mr = m[1];
+        double atReversal = m[2];
+        double recovered = m[3];
+        assertTrue(recovered < mr, "recoil remanence " + recovered + " below Mr " + mr);
+        assertTrue(recovered > atReversal, "recoil rises from the reversal point");
+    }
 }
