@@ -1,5 +1,7 @@
 package org.kneepoint.fitter.model.ja;
 
+import java.util.Arrays;
+import java.util.Comparator;
 import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
 import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactory;
@@ -53,24 +55,32 @@ public final class MajorLoopAnalysis {
         return brent.solve(200, f, low, high);
     }
 
-    /** ∫ M dH over [−Hmax, Hmax] along the branch that starts at (start, mStart). */
+    /** ∫ M dH over [−Hmax, Hmax] along the branch that starts at (start, mStart), visiting nodes in order. */
     private double areaUnder(double start, double mStart, double direction) {
-        GaussIntegrator rule = new GaussIntegratorFactory().legendre(NODES_PER_PANEL, 0, 1);
+        double[][] rule = unitRule();
         double width = 2 * Math.abs(start) / PANELS;
         double h = start;
         double m = mStart;
         double sum = 0;
         for (int panel = 0; panel < PANELS; panel++) {
-            int first = direction > 0 ? 0 : NODES_PER_PANEL - 1;
-            double panelLow = direction > 0 ? start + panel * width : start - (panel + 1) * width;
             for (int j = 0; j < NODES_PER_PANEL; j++) {
-                int node = direction > 0 ? first + j : first - j;
-                double hNode = panelLow + width * rule.getPoint(node);
+                double hNode = start + direction * width * (panel + rule[j][0]);
                 m = solver.advance(h, m, hNode);
                 h = hNode;
-                sum += width * rule.getWeight(node) * m;
+                sum += width * rule[j][1] * m;
             }
         }
         return sum;
+    }
+
+    /** Gauss–Legendre nodes on [0, 1] with their weights, nodes in ascending order. */
+    private static double[][] unitRule() {
+        GaussIntegrator rule = new GaussIntegratorFactory().legendre(NODES_PER_PANEL, 0, 1);
+        double[][] nodes = new double[NODES_PER_PANEL][];
+        for (int i = 0; i < NODES_PER_PANEL; i++) {
+            nodes[i] = new double[] {rule.getPoint(i), rule.getWeight(i)};
+        }
+        Arrays.sort(nodes, Comparator.comparingDouble(node -> node[0]));
+        return nodes;
     }
 }
