@@ -18,8 +18,8 @@ import org.apache.commons.math3.random.MersenneTwister;
  */
 final class CmaesGlobalSearch {
 
-    /** Half-widths of the search box in fit coordinates: Ms ×/÷ 2, a and k ×/÷ 20, c and u in logit. */
-    private static final double[] HALF_WIDTH = {Math.log(2), Math.log(20), Math.log(20), 4, 5};
+    /** Half-widths of the search box in fit coordinates: Ms ×/÷ 3, a and k ×/÷ 20, c and u in logit. */
+    private static final double[] HALF_WIDTH = {Math.log(3), Math.log(20), Math.log(20), 4, 5};
     private static final int POPULATION = 12;
 
     private CmaesGlobalSearch() {

@@ -12,6 +12,7 @@ final class FitParameterization {
     private static final double MARGIN = 1e-6;
     private static final double LOG_LOWEST = Math.log(1e-9);
     private static final double LOG_HIGHEST = Math.log(1e12);
+    private static final double LOGIT_LIMIT = 27;
 
     private FitParameterization() {
     }
@@ -20,11 +21,10 @@ final class FitParameterization {
         double ms = Math.exp(bounded(q[0]));
         double a = Math.exp(bounded(q[1]));
         double u = logistic(q[4]);
-        return new JilesAthertonParameters(ms, a, Math.exp(bounded(q[2])), logistic(q[3]),
-                Math.min(u, 1 - 1e-12) * 3 * a / ms);
+        return new JilesAthertonParameters(ms, a, Math.exp(bounded(q[2])), logistic(q[3]), u * 3 * a / ms);
     }
 
-    /** Keeps a logarithm within 1e-9 to 1e12 A/m, so a wild optimizer step stays finite. */
+    /** Keeps a logarithm of Ms, a or k within 1e-9 to 1e12 A/m, so a wild optimizer step stays finite. */
     private static double bounded(double logarithm) {
         return Math.min(Math.max(logarithm, LOG_LOWEST), LOG_HIGHEST);
     }
@@ -50,8 +50,10 @@ final class FitParameterization {
         return g;
     }
 
+    /** The logistic function with its argument held within ±{@value #LOGIT_LIMIT}, so c and u stay inside (0, 1). */
     private static double logistic(double x) {
-        return 1 / (1 + Math.exp(-x));
+        double held = Math.min(Math.max(x, -LOGIT_LIMIT), LOGIT_LIMIT);
+        return 1 / (1 + Math.exp(-held));
     }
 
     private static double logit(double value) {

@@ -7,10 +7,13 @@ import org.kneepoint.fitter.units.MagneticConstant;
  * Fast evaluation of a model along a {@link MeasuredLoop}'s history for fitting: one classical
  * RK4 step per measured interval (restarting at each point, so at every reversal). The legs
  * before the compared pass (demagnetized → prior fields → first H, and the jumps back to the
- * first H between settling passes) are cut into steps no longer than the median measured step.
- * The path is laid out once; each evaluation allocates nothing but its result.
+ * first H between settling passes) are cut into steps no longer than the median measured step,
+ * or than 1/{@value #LEAD_IN_STEPS} of the largest |H| where the data are denser. The path is laid out once; each evaluation allocates nothing but its result.
  */
 public final class FixedStepLoopEvaluator {
+
+    /** Steps per largest |H| on the legs before the compared pass, at the finest. */
+    private static final int LEAD_IN_STEPS = 400;
 
     private final double[] path;
     private final int firstCompared;
@@ -18,7 +21,14 @@ public final class FixedStepLoopEvaluator {
 
     public FixedStepLoopEvaluator(MeasuredLoop loop) {
         double[] h = loop.field();
-        double maximumStep = medianStep(h);
+        double largest = 0;
+        for (double value : h) {
+            largest = Math.max(largest, Math.abs(value));
+        }
+        for (double value : loop.priorField()) {
+            largest = Math.max(largest, Math.abs(value));
+        }
+        double maximumStep = Math.max(medianStep(h), largest / LEAD_IN_STEPS);
         PathBuilder builder = new PathBuilder(maximumStep);
         builder.add(0);
         for (double prior : loop.priorField()) {

@@ -42,7 +42,8 @@ final class JilesAthertonStartingValues {
     }
 
     private static JilesAthertonParameters iterate(LoopFeatures f, double a, double mTop, double hc) {
-        double ms = 1.15 * Math.max(mTop, f.largestMagnetization());
+        double ms = Double.isFinite(f.tipMagnetization()) ? 1.15 * Math.max(mTop, f.largestMagnetization())
+                : 2 * f.largestMagnetization();
         double c = 0.2;
         double k = hc;
         double alpha = 0;

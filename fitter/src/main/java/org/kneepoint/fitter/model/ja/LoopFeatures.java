@@ -5,7 +5,8 @@ import java.util.List;
 /**
  * What the starting values are computed from, read off the measured points: the upper tip, the
  * coercivity and remanence on a falling branch, and differential susceptibilities there
- * (slopes of local least-squares lines). A feature the data do not show is NaN.
+ * (slopes of local least-squares lines). A feature the data do not show is NaN; for a curve
+ * measured after a higher prior field, the tip and its slopes are not in the data.
  *
  * @param tipField          highest H, A/m (the magnetizing field for a second-quadrant curve)
  * @param tipMagnetization  M at the tip, A/m, or NaN
@@ -35,10 +36,12 @@ record LoopFeatures(double tipField, double tipMagnetization, double tipSlope, d
         double tipMagnetization = m[tip];
         double tipSlope = Double.NaN;
         double reversalSlope = Double.NaN;
+        boolean tipMeasured = true;
         for (double prior : loop.priorField()) {
             if (prior > tipField) {
                 tipField = prior;
                 tipMagnetization = Double.NaN;
+                tipMeasured = false;
             }
         }
         double coercivity = Double.NaN;
@@ -47,10 +50,10 @@ record LoopFeatures(double tipField, double tipMagnetization, double tipSlope, d
         double remanenceSlope = Double.NaN;
         for (BranchRun run : runs) {
             int window = Math.max(2, run.length() / 40);
-            if (run.direction() > 0 && run.last() == tip) {
+            if (tipMeasured && run.direction() > 0 && run.last() == tip) {
                 tipSlope = slope(h, m, run.last() - window, run.last());
             }
-            if (run.direction() < 0 && run.first() == tip) {
+            if (tipMeasured && run.direction() < 0 && run.first() == tip) {
                 reversalSlope = slope(h, m, run.first(), run.first() + window);
             }
             if (run.direction() < 0 && Double.isNaN(coercivity)) {
