@@ -12,7 +12,8 @@ import org.apache.commons.math3.analysis.solvers.BrentSolver;
  * Ms = (Mm + k·X)/(L + k·c·L'/a). Just after the tip reversal only the reversible term acts,
  * so c = X/dMan there (our own addition). The anhysteretic slope JTD take from a measured
  * anhysteretic is not in a loop, so a is scanned over a logarithmic grid, the other four are
- * iterated for each a, and the a whose loop fits best is kept.
+ * iterated for each a, and the a whose loop fits best is kept. A curve measured after a prior
+ * field shows no tip, so there the Ms start is also scanned, 1.5 to 6.5 times the largest M.
  */
 final class JilesAthertonStartingValues {
 
@@ -23,27 +24,31 @@ final class JilesAthertonStartingValues {
     }
 
     static JilesAthertonParameters estimate(LoopFeatures f, LoopResidual residual) {
-        double mTop = Double.isFinite(f.tipMagnetization()) ? f.tipMagnetization() : f.largestMagnetization();
+        boolean tipMeasured = Double.isFinite(f.tipMagnetization());
+        double mTop = tipMeasured ? f.tipMagnetization() : f.largestMagnetization();
         double hc = Double.isFinite(f.coercivity()) ? f.coercivity() : 0.1 * f.tipField();
-        JilesAthertonParameters best = null;
-        double bestScore = Double.POSITIVE_INFINITY;
+        double[] saturationFactors = tipMeasured ? new double[] {1.15} : new double[] {1.5, 2.5, 4, 6.5};
         double lowest = hc / 10;
         double highest = 20 * f.tipField();
-        for (int i = 0; i <= GRID; i++) {
-            double a = lowest * Math.pow(highest / lowest, (double) i / GRID);
-            JilesAthertonParameters candidate = iterate(f, a, Math.max(mTop, 1e-3 * f.tipField()), hc);
-            double score = residual.sumOfSquares(FitParameterization.toCoordinates(candidate));
-            if (score < bestScore) {
-                bestScore = score;
-                best = candidate;
+        JilesAthertonParameters best = null;
+        double bestScore = Double.POSITIVE_INFINITY;
+        for (double factor : saturationFactors) {
+            double msStart = factor * Math.max(mTop, f.largestMagnetization());
+            for (int i = 0; i <= GRID; i++) {
+                double a = lowest * Math.pow(highest / lowest, (double) i / GRID);
+                JilesAthertonParameters candidate = iterate(f, a, Math.max(mTop, 1e-3 * f.tipField()), hc, msStart);
+                double score = residual.sumOfSquares(FitParameterization.toCoordinates(candidate));
+                if (score < bestScore) {
+                    bestScore = score;
+                    best = candidate;
+                }
             }
         }
         return best;
     }
 
-    private static JilesAthertonParameters iterate(LoopFeatures f, double a, double mTop, double hc) {
-        double ms = Double.isFinite(f.tipMagnetization()) ? 1.15 * Math.max(mTop, f.largestMagnetization())
-                : 2 * f.largestMagnetization();
+    private static JilesAthertonParameters iterate(LoopFeatures f, double a, double mTop, double hc, double msStart) {
+        double ms = msStart;
         double c = 0.2;
         double k = hc;
         double alpha = 0;
