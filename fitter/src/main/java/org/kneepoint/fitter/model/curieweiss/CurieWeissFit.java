@@ -1,5 +1,8 @@
 package org.kneepoint.fitter.model.curieweiss;
 
+import java.util.Arrays;
+import java.util.Objects;
+
 /**
  * A Curie–Weiss fit and what it is worth. Standard errors are infinite when there are no degrees
  * of freedom (three points); the correlation matrix (order C, θ, χ0) does not need them.
@@ -37,5 +40,31 @@ public record CurieWeissFit(CurieWeissParameters parameters, double curieConstan
             result[i] = matrix[i].clone();
         }
         return result;
+    }
+
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof CurieWeissFit f && parameters.equals(f.parameters)
+                && Double.compare(curieConstantError, f.curieConstantError) == 0
+                && Double.compare(weissTemperatureError, f.weissTemperatureError) == 0
+                && Double.compare(temperatureIndependentError, f.temperatureIndependentError) == 0
+                && Arrays.deepEquals(correlation, f.correlation) && Double.compare(rmsResidual, f.rmsResidual) == 0
+                && points == f.points && Double.compare(temperatureMin, f.temperatureMin) == 0
+                && Double.compare(temperatureMax, f.temperatureMax) == 0 && behaviour == f.behaviour
+                && curieWeissSignificant == f.curieWeissSignificant && evaluations == f.evaluations;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(parameters, curieConstantError, weissTemperatureError, temperatureIndependentError,
+                Arrays.deepHashCode(correlation), rmsResidual, points, temperatureMin, temperatureMax, behaviour,
+                curieWeissSignificant, evaluations);
+    }
+
+    @Override
+    public String toString() {
+        return "CurieWeissFit[" + parameters + ", errors C " + curieConstantError + " K, θ " + weissTemperatureError
+                + " K, χ0 " + temperatureIndependentError + ", rms " + rmsResidual + ", " + points + " points, "
+                + behaviour + (curieWeissSignificant ? ", Curie–Weiss" : "") + "]";
     }
 }

@@ -1,5 +1,8 @@
 package org.kneepoint.fitter.model.ja;
 
+import java.util.Arrays;
+import java.util.Objects;
+
 /**
  * A Jiles–Atherton identification and what it is worth.
  *
@@ -33,5 +36,26 @@ public record JilesAthertonFit(JilesAthertonParameters parameters, JilesAtherton
             result[i] = matrix[i].clone();
         }
         return result;
+    }
+
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof JilesAthertonFit f && parameters.equals(f.parameters)
+                && standardErrors.equals(f.standardErrors) && Arrays.deepEquals(correlation, f.correlation)
+                && Double.compare(rmsB, f.rmsB) == 0 && evaluations == f.evaluations && iterations == f.iterations
+                && firstPoint == f.firstPoint && lastPoint == f.lastPoint
+                && Double.compare(fieldMin, f.fieldMin) == 0 && Double.compare(fieldMax, f.fieldMax) == 0;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(parameters, standardErrors, Arrays.deepHashCode(correlation), rmsB, evaluations, iterations,
+                firstPoint, lastPoint, fieldMin, fieldMax);
+    }
+
+    @Override
+    public String toString() {
+        return "JilesAthertonFit[" + parameters + ", errors " + standardErrors + ", rmsB " + rmsB + " T, "
+                + evaluations + " evaluations, " + iterations + " iterations, points " + firstPoint + "–" + lastPoint + "]";
     }
 }

@@ -1,5 +1,7 @@
 package org.kneepoint.fitter.model.ja;
 
+import java.util.Arrays;
+import java.util.Objects;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.units.MagneticConstant;
 
@@ -111,5 +113,23 @@ public record MeasuredLoop(double[] field, double[] fluxDensity, double[] priorF
             high = Math.max(high, v);
         }
         return high - low;
+    }
+
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof MeasuredLoop m && settlingPasses == m.settlingPasses && Arrays.equals(field, m.field)
+                && Arrays.equals(fluxDensity, m.fluxDensity) && Arrays.equals(priorField, m.priorField);
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(Arrays.hashCode(field), Arrays.hashCode(fluxDensity), Arrays.hashCode(priorField),
+                settlingPasses);
+    }
+
+    @Override
+    public String toString() {
+        return "MeasuredLoop[" + field.length + " points, " + priorField.length + " prior fields, "
+                + settlingPasses + " settling passes]";
     }
 }

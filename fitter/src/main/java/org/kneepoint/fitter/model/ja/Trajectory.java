@@ -1,5 +1,6 @@
 package org.kneepoint.fitter.model.ja;
 
+import java.util.Arrays;
 import org.kneepoint.fitter.units.MagneticConstant;
 
 /**
@@ -39,5 +40,21 @@ public record Trajectory(double[] field, double[] magnetization) {
 
     public int size() {
         return field.length;
+    }
+
+    @Override
+    public boolean equals(Object other) {
+        return other instanceof Trajectory t && Arrays.equals(field, t.field)
+                && Arrays.equals(magnetization, t.magnetization);
+    }
+
+    @Override
+    public int hashCode() {
+        return 31 * Arrays.hashCode(field) + Arrays.hashCode(magnetization);
+    }
+
+    @Override
+    public String toString() {
+        return "Trajectory[" + field.length + " points]";
     }
 }
