@@ -68,7 +68,7 @@ class JilesAthertonFitterTest {
             fractions.add(fraction);
         });
         JilesAthertonFit second = new JilesAthertonFitter(settings).fitLoop(data.loop(), FitProgress.ignore());
-        assertEquals(first.parameters(), second.parameters());
+        assertEquals(first, second);
         assertEquals(FitStage.STARTING_VALUES, stages.get(0));
         assertEquals(FitStage.DONE, stages.get(stages.size() - 1));
         for (int i = 1; i < fractions.size(); i++) {
