@@ -20,7 +20,8 @@ final class FitUncertainty {
     private FitUncertainty() {
     }
 
-    static JilesAthertonFit assess(LoopResidual residual, double[] q, int iterations, double fieldMin, double fieldMax) {
+    static JilesAthertonFit assess(LoopResidual residual, double[] q, int iterations, int earlierEvaluations,
+            double fieldMin, double fieldMax) {
         double[] r = residual.residuals(q);
         int n = r.length;
         double sum = 0;
@@ -65,7 +66,7 @@ final class FitUncertainty {
         }
         return new JilesAthertonFit(FitParameterization.toParameters(q),
                 new JilesAthertonStandardErrors(errors[0], errors[1], errors[2], errors[3], errors[4]), correlation,
-                Math.sqrt(sum / n), residual.evaluations(), iterations, 0, n - 1, fieldMin, fieldMax);
+                Math.sqrt(sum / n), earlierEvaluations + residual.evaluations(), iterations, 0, n - 1, fieldMin, fieldMax);
     }
 
     private static double[][] centralJacobian(LoopResidual residual, double[] q) {
