@@ -8,7 +8,8 @@ import org.kneepoint.fitter.error.BadInputException;
 
 /**
  * Refuses data no hysteresis model can be identified from: a single branch offered as a loop, a
- * second-quadrant curve whose H is not monotone or lies above its magnetizing field, and noise
+ * second-quadrant curve whose H is not monotone or lies above its magnetizing field, a history
+ * that never reaches positive H and M (the sample is magnetized along +), and noise
  * with no response to H (B must rise with H along the branches: a length-weighted Spearman rank
  * correlation of at least {@value #MINIMUM_RANK_CORRELATION}; C. Spearman, Am. J. Psychol. 15,
  * 72–101, 1904). Runs in O(n log n).
@@ -56,6 +57,12 @@ final class LoopShapeCheck {
     private static void requireResponse(MeasuredLoop loop, List<BranchRun> runs) {
         double[] h = loop.field();
         double[] b = loop.fluxDensity();
+        double highestField = Math.max(Arrays.stream(h).max().orElseThrow(),
+                Arrays.stream(loop.priorField()).max().orElse(Double.NEGATIVE_INFINITY));
+        if (!(highestField > 0) || !(Arrays.stream(loop.magnetization()).max().orElseThrow() > 0)) {
+            throw new BadInputException("the history never reaches positive H and M (highest H " + highestField
+                    + " A/m); expected a sample magnetized along + (DESIGN §4)");
+        }
         SpearmansCorrelation spearman = new SpearmansCorrelation();
         double weighted = 0;
         int counted = 0;

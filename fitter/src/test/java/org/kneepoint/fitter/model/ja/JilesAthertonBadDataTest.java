@@ -112,4 +112,16 @@ class JilesAthertonBadDataTest {
         assertThrows(BadInputException.class, () -> new JilesAthertonFitSettings(1, -1, 10));
         assertThrows(BadInputException.class, () -> new JilesAthertonFitSettings(1, 10, 0));
     }
+
+    @Test
+    void a_loop_that_never_reaches_positive_field_is_rejected() {
+        double[] h = new double[200];
+        double[] b = new double[200];
+        for (int i = 0; i < 200; i++) {
+            h[i] = -3000 + 2000 * Math.cos(2 * Math.PI * i / 199);
+            b[i] = 1e-4 * h[i] + (i < 100 ? 0.1 : -0.1);
+        }
+        MeasuredLoop loop = MeasuredLoop.ofFluxDensity(h, b);
+        assertTrue(messageOf(() -> fitter.fitLoop(loop, FitProgress.ignore())).contains("positive H"));
+    }
 }
