@@ -101,4 +101,14 @@ class IntegratorAccuracyTest {
         assertTrue(error.getMessage().contains("value 2"), error.getMessage());
         assertThrows(BadInputException.class, () -> simulator.simulate(new double[0]));
     }
+
+    @Test
+    void loop_metrics_and_solvers_reject_out_of_range_settings() {
+        MajorLoopAnalysis analysis = MajorLoopAnalysis.adaptive(SOFT_IRON);
+        assertThrows(BadInputException.class, () -> analysis.measure(0));
+        assertThrows(BadInputException.class, () -> analysis.measure(Double.NaN));
+        JilesAthertonModel model = new JilesAthertonModel(SOFT_IRON);
+        assertThrows(BadInputException.class, () -> new AdaptiveBranchSolver(model, 0.5));
+        assertThrows(BadInputException.class, () -> new FixedStepBranchSolver(model, 0));
+    }
 }
