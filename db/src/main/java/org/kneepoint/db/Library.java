@@ -17,6 +17,9 @@ import org.postgresql.ds.PGSimpleDataSource;
  */
 public final class Library implements AutoCloseable {
 
+    /** The schema version this build migrates to: the number of its newest migration script. */
+    public static final int SCHEMA_VERSION = 1;
+
     /** Flyway's own log (java.util.logging when no slf4j binding is present); failures are reported by us instead. */
     private static final java.util.logging.Logger FLYWAY_LOG = java.util.logging.Logger.getLogger("org.flywaydb");
     /** jOOQ's start-up notes, likewise. */

@@ -28,7 +28,7 @@ class LibraryTest {
     @Test
     void a_new_folder_becomes_a_migrated_library(@TempDir Path folder) {
         try (Library library = Library.open(DatabaseLocation.ofFolder(folder))) {
-            assertEquals(1, library.schemaVersion());
+            assertEquals(Library.SCHEMA_VERSION, library.schemaVersion());
             assertTrue(library.reader().isEmpty());
         }
         assertTrue(folder.resolve("kneepoint.mv.db").toFile().exists());

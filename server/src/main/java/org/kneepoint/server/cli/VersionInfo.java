@@ -23,6 +23,7 @@ public final class VersionInfo implements CommandLine.IVersionProvider {
 
     @Override
     public String[] getVersion() {
-        return new String[] {"kneepoint " + version(), "Java " + System.getProperty("java.version")};
+        return new String[] {"kneepoint " + version(), "library schema version " + org.kneepoint.db.Library.SCHEMA_VERSION,
+            "Java " + System.getProperty("java.version")};
     }
 }
