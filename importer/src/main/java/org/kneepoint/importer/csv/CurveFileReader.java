@@ -97,7 +97,7 @@ public final class CurveFileReader {
         @Override
         public CurveFile result() {
             CurveMetadata meta = new CurveMetadata(metadata.text("grade"), metadata.text("family"), metadata.text("supplier"),
-                    metadata.quantity("temperature", Dimension.TEMPERATURE), metadata.choice("kind", CurveMetadata.KINDS),
+                    metadata.quantity("density", Dimension.DENSITY), metadata.quantity("temperature", Dimension.TEMPERATURE), metadata.choice("kind", CurveMetadata.KINDS),
                     metadata.text("source"), metadata.text("notes"));
             CurveKind kind = CurveKinds.of(source, meta.kind(), layout.quantity());
             if (meta.temperatureK() != null && layout.temperatureColumn() >= 0) {

@@ -106,7 +106,8 @@ public final class CurveJsonReader {
         List<String> values = new ArrayList<>();
         for (JsonToken token = parser.nextToken(); token != JsonToken.END_ARRAY; token = parser.nextToken()) {
             if (token != JsonToken.VALUE_NUMBER_INT && token != JsonToken.VALUE_NUMBER_FLOAT) {
-                throw new BadInputException(at(source, parser, "rows"), "expected a number, got " + token.asString());
+                throw new BadInputException(at(source, parser, "rows"), "expected a number, got "
+                        + (token == JsonToken.VALUE_STRING ? "the text \"" + parser.getText() + "\"" : parser.getText()));
             }
             values.add(parser.getText());
         }

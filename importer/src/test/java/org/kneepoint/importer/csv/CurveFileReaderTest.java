@@ -89,7 +89,7 @@ class CurveFileReaderTest {
         one column                 | 'H [kA/m]\n0\n'                                     | curve.csv, line 1: expected a header row of at least two columns separated by commas, semicolons or tabs, such as 'H [kOe],J [kG]'
         missing cell               | 'H [kA/m],J [T]\n0,1.2\n-1\n'                       | curve.csv, line 3: 1 cells, expected 2 (comma-separated, as in the header)
         conflicting duplicates     | 'H [kA/m],J [T]\n0,1.2\n-100,1.1\n-100,0.8\n'        | curve.csv, line 4: H = -100000 A/m again, with J = 0.800000 T against 1.10000 T on line 3 (conflicting duplicates)
-        unknown metadata key       | '# temprature: 20 C\nH [kA/m],J [T]\n0,1\n'           | curve.csv, line 1: unknown metadata key 'temprature'; expected one of [grade, family, supplier, temperature, kind, source, notes]
+        unknown metadata key       | '# temprature: 20 C\nH [kA/m],J [T]\n0,1\n'           | curve.csv, line 1: unknown metadata key 'temprature'; expected one of [grade, family, supplier, density, temperature, kind, source, notes]
         bad temperature            | '# temperature: 20 kA/m\nH [kA/m],J [T]\n0,1\n'       | curve.csv, line 1: expected a temperature such as 20 °C or 293.15 K, got '20 kA/m' ('kA/m' is a field strength unit)
         kind against column        | '# kind: normal\nH [kA/m],J [T]\n0,1\n'              | curve.csv: the metadata say kind: normal but the value column holds J; a normal curve has a B column
         decimal comma with commas  | 'H [kA/m],J [T]\n0,1,2\n'                           | curve.csv, line 2: 3 cells, expected 2 (comma-separated, as in the header)

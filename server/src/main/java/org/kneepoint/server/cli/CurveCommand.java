@@ -21,16 +21,27 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code kneepoint curve FILE}: reads a curve file and characterizes each curve in it. */
+/**
+ * {@code kneepoint curve FILE} characterizes each curve of a curve file; {@code kneepoint curve
+ * GRADE --temperature T} characterizes the grade's stored curves at T.
+ */
 @Command(name = "curve", mixinStandardHelpOptions = true,
-        description = "Characterize the curves of a curve file: Br, HcB, HcJ, (BH)max, Hk, squareness, recoil permeability.")
+        description = {"Characterize curves: Br, HcB, HcJ, (BH)max, Hk, squareness, recoil permeability.",
+            "FILE: the curves of a curve file. GRADE --temperature T: the stored curves of a grade at T."})
 final class CurveCommand implements Callable<Integer> {
 
     @Spec
     private CommandSpec spec;
 
-    @Parameters(paramLabel = "FILE", description = "A curve file (header row with units, e.g. 'H [kOe],J [kG]').")
-    private Path file;
+    @Parameters(paramLabel = "FILE|GRADE", description = "A curve file (header row with units, e.g. 'H [kOe],J [kG]'), or a grade with --temperature.")
+    private String target;
+
+    @Option(names = "--temperature", paramLabel = "T", converter = TemperatureConverter.class,
+            description = "Characterize the stored curves of the grade GRADE at this temperature, e.g. 120C.")
+    private Double temperatureK;
+
+    @picocli.CommandLine.Mixin
+    private LibraryOption libraryOption;
 
     @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
     private boolean json;
@@ -41,16 +52,24 @@ final class CurveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (maxFileSize <= 0) {
-            throw new BadInputException(InputLocation.of("option --max-file-size"), "must be a positive number of bytes, got " + maxFileSize);
+        List<DemagnetizationCurve> curves = new ArrayList<>();
+        String source;
+        if (temperatureK == null) {
+            CurveFile file = new CurveFileReader(SizeLimit.of(maxFileSize)).read(Path.of(target));
+            source = file.source();
+            curves.addAll(file.curves());
+        } else {
+            source = target;
+            try (org.kneepoint.db.Library library = libraryOption.open()) {
+                StoredCurves.at(library.reader(), target, temperatureK).forEach(stored -> curves.add(stored.curve()));
+            }
         }
-        CurveFile curves = new CurveFileReader(new ReadLimits(maxFileSize)).read(file);
         List<Map<String, Object>> documents = new ArrayList<>();
         StringBuilder tables = new StringBuilder();
-        for (DemagnetizationCurve curve : curves.curves()) {
-            Characterization characterization = characterize(curves.source(), curve);
-            documents.add(CharacterizationView.json(curves.source(), curve, characterization));
-            tables.append(CharacterizationView.table(curves.source(), curve, characterization));
+        for (DemagnetizationCurve curve : curves) {
+            Characterization characterization = characterize(source, curve);
+            documents.add(CharacterizationView.json(source, curve, characterization));
+            tables.append(CharacterizationView.table(source, curve, characterization));
         }
         var out = spec.commandLine().getOut();
         out.print(json ? Json.write(documents.size() == 1 ? documents.get(0) : documents) + System.lineSeparator() : tables);

@@ -1,0 +1,175 @@
+package org.kneepoint.importer.json;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.kneepoint.fitter.curve.CurveKind;
+import org.kneepoint.fitter.curve.DemagnetizationCurve;
+import org.kneepoint.fitter.curve.Quantity;
+import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.fitter.error.InputLocation;
+import org.kneepoint.fitter.library.FitRecord;
+import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.ImportInfo;
+import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.fitter.library.LibrarySnapshot;
+import org.kneepoint.fitter.library.SusceptibilityPoint;
+import org.kneepoint.fitter.units.SusceptibilityForm;
+
+/**
+ * The whole library as one JSON document and back, losslessly: SI values written with the
+ * shortest decimal that reads back to the same double, times as ISO-8601 instants, everything in
+ * the fixed order of {@link LibrarySnapshot}, so that backup → restore → backup gives the same
+ * bytes. The document is described in docs/backup-format.md.
+ */
+public final class BackupCodec {
+
+    public static final String FORMAT = "kneepoint-library-backup";
+    public static final int VERSION = 1;
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+
+    private BackupCodec() {
+    }
+
+    public static String write(LibrarySnapshot snapshot) {
+        Map<String, Object> document = new LinkedHashMap<>();
+        document.put("format", FORMAT);
+        document.put("version", VERSION);
+        document.put("imports", snapshot.imports().stream().map(BackupCodec::importJson).toList());
+        document.put("grades", snapshot.grades().stream().map(BackupCodec::gradeJson).toList());
+        document.put("curves", snapshot.curves().stream().map(BackupCodec::curveJson).toList());
+        document.put("susceptibility", snapshot.susceptibility().stream().map(BackupCodec::susceptibilityJson).toList());
+        document.put("fits", snapshot.fits().stream().map(BackupCodec::fitJson).toList());
+        try {
+            return MAPPER.writeValueAsString(document) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot write the backup", e);
+        }
+    }
+
+    private static Map<String, Object> importJson(ImportInfo info) {
+        Map<String, Object> json = new LinkedHashMap<>();
+        json.put("fileName", info.fileName());
+        json.put("sha256", info.sha256());
+        json.put("importedAt", info.importedAt().toString());
+        json.put("curves", info.curves());
+        json.put("points", info.points());
+        json.put("susceptibilityPoints", info.susceptibilityPoints());
+        return json;
+    }
+
+    private static Map<String, Object> gradeJson(GradeInfo grade) {
+        Map<String, Object> json = new LinkedHashMap<>();
+        json.put("name", grade.name());
+        json.put("family", grade.family());
+        json.put("supplier", grade.supplier());
+        json.put("density", grade.density());
+        json.put("notes", grade.notes());
+        json.put("provenance", grade.provenance());
+        return json;
+    }
+
+    private static Map<String, Object> curveJson(LibraryCurve stored) {
+        DemagnetizationCurve curve = stored.curve();
+        Map<String, Object> json = new LinkedHashMap<>();
+        json.put("grade", stored.grade());
+        json.put("temperatureK", curve.temperatureK());
+        json.put("kind", curve.kind().name().toLowerCase(Locale.ROOT));
+        json.put("quantity", curve.quantity().name());
+        json.put("source", stored.source());
+        json.put("importSha256", stored.importSha256());
+        json.put("h", curve.h());
+        json.put("values", curve.values());
+        return json;
+    }
+
+    private static Map<String, Object> susceptibilityJson(SusceptibilityPoint point) {
+        Map<String, Object> json = new LinkedHashMap<>();
+        json.put("material", point.material());
+        json.put("temperatureK", point.temperatureK());
+        json.put("chi", point.chi());
+        json.put("form", point.form().name().toLowerCase(Locale.ROOT));
+        json.put("density", point.density());
+        json.put("molarMass", point.molarMass());
+        json.put("source", point.source());
+        json.put("importSha256", point.importSha256());
+        return json;
+    }
+
+    private static Map<String, Object> fitJson(FitRecord fit) {
+        Map<String, Object> json = new LinkedHashMap<>();
+        json.put("grade", fit.grade());
+        json.put("curveTemperatureK", fit.curveTemperatureK());
+        json.put("curveKind", fit.curveKind());
+        json.put("material", fit.material());
+        json.put("model", fit.model());
+        json.put("parameters", fit.parametersJson());
+        json.put("residual", fit.residual());
+        json.put("fittedAt", fit.fittedAt().toString());
+        json.put("programVersion", fit.programVersion());
+        return json;
+    }
+
+    /** Reads a backup document; {@code source} names it in messages. */
+    public static LibrarySnapshot read(String source, String text) {
+        JsonNode root;
+        try {
+            root = MAPPER.readTree(text);
+        } catch (JsonProcessingException e) {
+            var at = e.getLocation();
+            throw new BadInputException(InputLocation.cell(source, Math.max(0, at == null ? 0 : at.getLineNr()),
+                    Math.max(0, at == null ? 0 : at.getColumnNr()), null), "not valid JSON: " + e.getOriginalMessage());
+        }
+        if (root == null || !FORMAT.equals(root.path("format").asText()) || root.path("version").asInt() != VERSION) {
+            throw new BadInputException(InputLocation.of(source), "not a Kneepoint backup (expected \"format\": \"" + FORMAT
+                    + "\", \"version\": " + VERSION + ")");
+        }
+        BackupFields fields = new BackupFields(source);
+        try {
+            List<ImportInfo> imports = new ArrayList<>();
+            for (JsonNode node : fields.array(root, "imports")) {
+                imports.add(new ImportInfo(fields.text(node, "fileName"), fields.text(node, "sha256"),
+                        Instant.parse(fields.text(node, "importedAt")), node.path("curves").asInt(), node.path("points").asInt(),
+                        node.path("susceptibilityPoints").asInt()));
+            }
+            List<GradeInfo> grades = new ArrayList<>();
+            for (JsonNode node : fields.array(root, "grades")) {
+                grades.add(new GradeInfo(fields.text(node, "name"), fields.text(node, "family"), fields.optionalText(node, "supplier"),
+                        fields.optionalNumber(node, "density"), fields.optionalText(node, "notes"), fields.optionalText(node, "provenance")));
+            }
+            List<LibraryCurve> curves = new ArrayList<>();
+            for (JsonNode node : fields.array(root, "curves")) {
+                DemagnetizationCurve curve = new DemagnetizationCurve(
+                        CurveKind.valueOf(fields.text(node, "kind").toUpperCase(Locale.ROOT)), Quantity.valueOf(fields.text(node, "quantity")),
+                        fields.numbers(node, "h"), fields.numbers(node, "values"), fields.optionalNumber(node, "temperatureK"));
+                curves.add(new LibraryCurve(fields.text(node, "grade"), curve, fields.optionalText(node, "source"),
+                        fields.optionalText(node, "importSha256")));
+            }
+            List<SusceptibilityPoint> susceptibility = new ArrayList<>();
+            for (JsonNode node : fields.array(root, "susceptibility")) {
+                susceptibility.add(new SusceptibilityPoint(fields.text(node, "material"), fields.number(node, "temperatureK"),
+                        fields.number(node, "chi"), SusceptibilityForm.valueOf(fields.text(node, "form").toUpperCase(Locale.ROOT)),
+                        fields.optionalNumber(node, "density"), fields.optionalNumber(node, "molarMass"),
+                        fields.optionalText(node, "source"), fields.optionalText(node, "importSha256")));
+            }
+            List<FitRecord> fits = new ArrayList<>();
+            for (JsonNode node : fields.array(root, "fits")) {
+                fits.add(new FitRecord(fields.optionalText(node, "grade"), fields.optionalNumber(node, "curveTemperatureK"),
+                        fields.optionalText(node, "curveKind"), fields.optionalText(node, "material"), fields.text(node, "model"),
+                        fields.text(node, "parameters"), fields.optionalNumber(node, "residual"),
+                        Instant.parse(fields.text(node, "fittedAt")), fields.text(node, "programVersion")));
+            }
+            return new LibrarySnapshot(imports, grades, curves, susceptibility, fits);
+        } catch (IllegalArgumentException | java.time.format.DateTimeParseException e) {
+            throw new BadInputException(InputLocation.of(source), "invalid backup content: " + e.getMessage());
+        }
+    }
+}

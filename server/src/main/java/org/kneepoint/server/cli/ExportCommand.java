@@ -1,0 +1,106 @@
+package org.kneepoint.server.cli;
+
+import java.nio.file.Path;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.curve.CurveKind;
+import org.kneepoint.fitter.curve.CurveTable;
+import org.kneepoint.fitter.curve.CurveTables;
+import org.kneepoint.fitter.curve.Quantity;
+import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.importer.export.CurveExportWriter;
+import org.kneepoint.importer.export.ExportHeader;
+import org.kneepoint.importer.export.ExportUnits;
+import org.kneepoint.server.text.Temperatures;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/**
+ * {@code kneepoint export GRADE --temperature T}: a grade's curve at T as CSV (re-readable by
+ * {@code import}), JSON or a bare table, in SI or CGS, as stored or resampled, optionally shifted
+ * so that B = 0 at H = 0. The curve comes from {@link StoredCurves}; the modeled curve at any
+ * temperature will come from the same place once the temperature model exists.
+ */
+@Command(name = "export", mixinStandardHelpOptions = true, description = "Export a grade's curve at a temperature.")
+final class ExportCommand implements Callable<Integer> {
+
+    enum Format { csv, json }
+
+    enum CurveChoice { normal, intrinsic }
+
+    enum UnitChoice { si, cgs }
+
+    @Spec
+    private CommandSpec spec;
+
+    @Mixin
+    private LibraryOption libraryOption;
+
+    @Parameters(paramLabel = "GRADE", description = "The grade's name.")
+    private String grade;
+
+    @Option(names = "--temperature", required = true, converter = TemperatureConverter.class, paramLabel = "T",
+            description = "Temperature of the curve, e.g. 120C.")
+    private double temperatureK;
+
+    @Option(names = "--format", defaultValue = "csv", description = "csv or json (default ${DEFAULT-VALUE}).")
+    private Format format;
+
+    @Option(names = "--curve", defaultValue = "normal", description = "normal (H, B) or intrinsic (H, J); default ${DEFAULT-VALUE}.")
+    private CurveChoice curve;
+
+    @Option(names = "--points", paramLabel = "N", description = "Resample to N points evenly spaced in H on the monotone curve.")
+    private Integer points;
+
+    @Option(names = "--units", defaultValue = "si", description = "si (A/m, T) or cgs (Oe, G); default ${DEFAULT-VALUE}.")
+    private UnitChoice units;
+
+    @Option(names = "--shifted", description = "Shift H by HcB so that B = 0 at H = 0 (normal curve only).")
+    private boolean shifted;
+
+    @Option(names = "--bare", description = "Only two columns of numbers: no metadata, no header (CSV only).")
+    private boolean bare;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE instead of standard output.")
+    private Path output;
+
+    @Override
+    public Integer call() {
+        LibraryCurve stored;
+        GradeInfo info;
+        try (Library library = libraryOption.open()) {
+            List<LibraryCurve> curves = StoredCurves.at(library.reader(), grade, temperatureK);
+            stored = curves.stream().min(Comparator.comparing(c -> c.curve().kind() == CurveKind.LOOP)).orElseThrow();
+            info = library.reader().grade(grade).orElseThrow();
+        }
+        if (bare && format == Format.json) {
+            throw new org.kneepoint.fitter.error.BadInputException("--bare writes CSV numbers only; leave out --format json");
+        }
+        Quantity quantity = curve == CurveChoice.normal ? Quantity.B : Quantity.J;
+        CurveTable table = CurveTables.of(stored.curve(), quantity, points, shifted);
+        ExportUnits exportUnits = units == UnitChoice.si ? ExportUnits.SI : ExportUnits.CGS;
+        String notes = String.format(Locale.ROOT, "exported by kneepoint %s from the stored %s curve at %s: %s",
+                VersionInfo.version(), stored.curve().kind().name().toLowerCase(Locale.ROOT),
+                Temperatures.celsius(stored.curve().temperatureK()), table.description());
+        ExportHeader header = new ExportHeader(info.name(), info.family(), stored.curve().temperatureK(),
+                quantity == Quantity.B ? "normal" : "intrinsic", stored.source(), notes);
+        String text = bare ? CurveExportWriter.bare(table, exportUnits)
+                : format == Format.json ? CurveExportWriter.json(header, table, exportUnits)
+                : CurveExportWriter.csv(header, table, exportUnits);
+        if (output == null) {
+            spec.commandLine().getOut().print(text);
+            spec.commandLine().getOut().flush();
+        } else {
+            OutputFile.write(output, text);
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,67 @@
+package org.kneepoint.server.cli;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.library.GradeSummary;
+import org.kneepoint.server.text.Json;
+import org.kneepoint.server.text.Temperatures;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code kneepoint grades}: the grades in the library, with their families and the temperatures of their curves. */
+@Command(name = "grades", mixinStandardHelpOptions = true, description = "List the grades in the library.")
+final class GradesCommand implements Callable<Integer> {
+
+    @Spec
+    private CommandSpec spec;
+
+    @Mixin
+    private LibraryOption libraryOption;
+
+    @Option(names = "--family", paramLabel = "FAMILY", description = "Only grades of this family, e.g. 'sintered NdFeB'.")
+    private String family;
+
+    @Option(names = "--json", description = "Print a JSON array (temperatures in K) instead of a table.")
+    private boolean json;
+
+    @Override
+    public Integer call() {
+        List<GradeSummary> grades;
+        try (Library library = libraryOption.open()) {
+            grades = library.reader().grades(family);
+        }
+        var out = spec.commandLine().getOut();
+        if (json) {
+            List<Map<String, Object>> rows = new ArrayList<>();
+            for (GradeSummary grade : grades) {
+                Map<String, Object> row = new LinkedHashMap<>();
+                row.put("name", grade.name());
+                row.put("family", grade.family());
+                row.put("supplier", grade.supplier());
+                row.put("temperaturesK", grade.temperaturesK());
+                row.put("curves", grade.curves());
+                rows.add(row);
+            }
+            out.println(Json.write(rows));
+        } else if (grades.isEmpty()) {
+            out.println(family == null ? "The library has no grades yet; 'kneepoint import FILE' or 'kneepoint demo' adds some."
+                    : "No grades of family '" + family + "'.");
+        } else {
+            int width = Math.min(40, grades.stream().mapToInt(grade -> grade.name().length()).max().orElse(5));
+            out.printf("%-" + width + "s  %-18s  %s%n", "grade", "family", "curves at");
+            for (GradeSummary grade : grades) {
+                out.printf("%-" + width + "s  %-18s  %s%n", grade.name(), grade.family(),
+                        String.join(", ", grade.temperaturesK().stream().map(Temperatures::celsius).toList()));
+            }
+        }
+        out.flush();
+        return 0;
+    }
+}

@@ -1,0 +1,59 @@
+package org.kneepoint.server.cli;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.kneepoint.db.Library;
+import org.kneepoint.importer.csv.ReadLimits;
+import org.kneepoint.server.library.ImportPlan;
+import org.kneepoint.server.library.ImportPlanner;
+import org.kneepoint.server.text.ImportView;
+import org.kneepoint.server.text.Json;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code kneepoint import FILE...}: reads, checks and stores curve files and susceptibility tables in one transaction. */
+@Command(name = "import", mixinStandardHelpOptions = true,
+        description = "Import curve files and susceptibility tables into the library (all or nothing).")
+final class ImportCommand implements Callable<Integer> {
+
+    @Spec
+    private CommandSpec spec;
+
+    @Mixin
+    private LibraryOption libraryOption;
+
+    @Parameters(paramLabel = "FILE", arity = "1..*", description = "Curve files (.csv, .tsv, .txt, .json) or susceptibility tables.")
+    private List<Path> files;
+
+    @Option(names = "--dry-run", description = "Read and check everything, report what would be imported, write nothing.")
+    private boolean dryRun;
+
+    @Option(names = "--json", description = "Print one JSON document instead of a table.")
+    private boolean json;
+
+    @Option(names = "--max-file-size", paramLabel = "BYTES", defaultValue = "" + ReadLimits.DEFAULT_MAX_BYTES,
+            description = "Refuse files larger than this (default: ${DEFAULT-VALUE} bytes).")
+    private long maxFileSize;
+
+    @Override
+    public Integer call() {
+        try (Library library = libraryOption.open()) {
+            List<ImportPlan> plans = new ImportPlanner(SizeLimit.of(maxFileSize), library.reader()).plan(files, Instant.now());
+            List<org.kneepoint.fitter.library.ImportBatch> batches = plans.stream()
+                    .filter(plan -> !plan.alreadyImported()).map(ImportPlan::batch).toList();
+            if (!dryRun && !batches.isEmpty()) {
+                library.writer().importBatches(batches);
+            }
+            var out = spec.commandLine().getOut();
+            out.print(json ? Json.write(ImportView.json(plans, dryRun)) + System.lineSeparator() : ImportView.table(plans, dryRun));
+            out.flush();
+        }
+        return 0;
+    }
+}
