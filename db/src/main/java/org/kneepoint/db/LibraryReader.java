@@ -1,7 +1,6 @@
 package org.kneepoint.db;
 
 import static org.kneepoint.db.jooq.Tables.CURVE;
-import static org.kneepoint.db.jooq.Tables.CURVE_POINT;
 import static org.kneepoint.db.jooq.Tables.FIT;
 import static org.kneepoint.db.jooq.Tables.GRADE;
 import static org.kneepoint.db.jooq.Tables.IMPORT_RECORD;
@@ -84,34 +83,17 @@ public final class LibraryReader {
     }
 
     private List<LibraryCurve> curveRows(Condition condition) {
-        var rows = dsl.select(CURVE.ID, GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.QUANTITY, CURVE.SOURCE,
-                        CURVE.POINT_COUNT, IMPORT_RECORD.SHA256)
+        return dsl.select(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.QUANTITY, CURVE.SOURCE, CURVE.POINT_COUNT,
+                        CURVE.H_VALUES, CURVE.MEASURED_VALUES, IMPORT_RECORD.SHA256)
                 .from(CURVE).join(GRADE).on(CURVE.GRADE_ID.eq(GRADE.ID))
                 .leftJoin(IMPORT_RECORD).on(CURVE.IMPORT_ID.eq(IMPORT_RECORD.ID))
-                .where(condition).orderBy(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.ID).fetch();
-        Map<Long, double[][]> points = new LinkedHashMap<>();
-        for (var row : rows) {
-            points.put(row.value1(), new double[][] {new double[row.value7()], new double[row.value7()]});
-        }
-        if (!points.isEmpty()) {
-            dsl.select(CURVE_POINT.CURVE_ID, CURVE_POINT.ORDINAL, CURVE_POINT.H, CURVE_POINT.MEASURED).from(CURVE_POINT)
-                    .join(CURVE).on(CURVE_POINT.CURVE_ID.eq(CURVE.ID)).join(GRADE).on(CURVE.GRADE_ID.eq(GRADE.ID))
-                    .where(condition)
-                    .orderBy(CURVE_POINT.CURVE_ID, CURVE_POINT.ORDINAL)
-                    .forEach(point -> {
-                        double[][] columns = points.get(point.value1());
-                        columns[0][point.value2()] = point.value3();
-                        columns[1][point.value2()] = point.value4();
-                    });
-        }
-        List<LibraryCurve> curves = new ArrayList<>();
-        for (var row : rows) {
-            double[][] columns = points.get(row.value1());
-            CurveKind kind = CurveKind.valueOf(row.value4().toUpperCase(Locale.ROOT));
-            DemagnetizationCurve curve = new DemagnetizationCurve(kind, Quantity.valueOf(row.value5()), columns[0], columns[1], row.value3());
-            curves.add(new LibraryCurve(row.value2(), curve, row.value6(), row.value8()));
-        }
-        return curves;
+                .where(condition).orderBy(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.ID)
+                .fetch(row -> {
+                    CurveKind kind = CurveKind.valueOf(row.value3().toUpperCase(Locale.ROOT));
+                    DemagnetizationCurve curve = new DemagnetizationCurve(kind, Quantity.valueOf(row.value4()),
+                            PackedDoubles.unpack(row.value7(), row.value6()), PackedDoubles.unpack(row.value8(), row.value6()), row.value2());
+                    return new LibraryCurve(row.value1(), curve, row.value5(), row.value9());
+                });
     }
 
     public Optional<ImportInfo> importWithChecksum(String sha256) {
@@ -160,7 +142,7 @@ public final class LibraryReader {
     /** Row count of every table, for checks that a failed write left nothing behind. */
     public Map<String, Integer> rowCounts() {
         Map<String, Integer> counts = new LinkedHashMap<>();
-        for (Table<? extends Record> table : List.of(IMPORT_RECORD, MATERIAL_FAMILY, GRADE, CURVE, CURVE_POINT, SUSCEPTIBILITY_POINT, FIT)) {
+        for (Table<? extends Record> table : List.of(IMPORT_RECORD, MATERIAL_FAMILY, GRADE, CURVE, SUSCEPTIBILITY_POINT, FIT)) {
             counts.put(table.getName(), dsl.fetchCount(table));
         }
         return counts;

@@ -1,7 +1,6 @@
 package org.kneepoint.db;
 
 import static org.kneepoint.db.jooq.Tables.CURVE;
-import static org.kneepoint.db.jooq.Tables.CURVE_POINT;
 import static org.kneepoint.db.jooq.Tables.FIT;
 import static org.kneepoint.db.jooq.Tables.GRADE;
 import static org.kneepoint.db.jooq.Tables.IMPORT_RECORD;
@@ -10,7 +9,6 @@ import static org.kneepoint.db.jooq.Tables.SUSCEPTIBILITY_POINT;
 
 import java.time.ZoneOffset;
 import java.util.Locale;
-import org.jooq.BatchBindStep;
 import org.jooq.DSLContext;
 import org.jooq.Record1;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
@@ -24,7 +22,6 @@ import org.kneepoint.fitter.library.SusceptibilityPoint;
 /** Inserts rows inside one transaction (its own {@link DSLContext}); the callers own the transaction. */
 final class RowWriter {
 
-    private static final int BATCH_ROWS = 5000;
     /** Two curve temperatures closer than this are the same temperature. */
     private static final double SAME_TEMPERATURE_K = 1e-6;
 
@@ -95,7 +92,7 @@ final class RowWriter {
             throw new ConflictException(String.format(Locale.ROOT, "grade '%s' already has a %s curve at %.2f K",
                     stored.grade(), kind, curve.temperatureK()));
         }
-        long curveId = tx.insertInto(CURVE)
+        tx.insertInto(CURVE)
                 .set(CURVE.GRADE_ID, gradeId)
                 .set(CURVE.TEMPERATURE_K, curve.temperatureK())
                 .set(CURVE.KIND, kind)
@@ -103,26 +100,9 @@ final class RowWriter {
                 .set(CURVE.SOURCE, stored.source())
                 .set(CURVE.IMPORT_ID, importId)
                 .set(CURVE.POINT_COUNT, curve.size())
-                .returning(CURVE.ID).fetchOne().getId();
-        insertPoints(curveId, curve.h(), curve.values());
-    }
-
-    private void insertPoints(long curveId, double[] h, double[] values) {
-        BatchBindStep batch = null;
-        for (int i = 0; i < h.length; i++) {
-            if (batch == null) {
-                batch = tx.batch(tx.insertInto(CURVE_POINT, CURVE_POINT.CURVE_ID, CURVE_POINT.ORDINAL, CURVE_POINT.H, CURVE_POINT.MEASURED)
-                        .values((Long) null, (Integer) null, (Double) null, (Double) null));
-            }
-            batch.bind(curveId, i, h[i], values[i]);
-            if ((i + 1) % BATCH_ROWS == 0) {
-                batch.execute();
-                batch = null;
-            }
-        }
-        if (batch != null) {
-            batch.execute();
-        }
+                .set(CURVE.H_VALUES, PackedDoubles.pack(curve.h()))
+                .set(CURVE.MEASURED_VALUES, PackedDoubles.pack(curve.values()))
+                .execute();
     }
 
     void insertSusceptibility(SusceptibilityPoint point, Long importId) {

@@ -106,7 +106,7 @@ class LibraryTest {
                 assertEquals(grade.name(), library.reader().curves(grade.name()).get(0).source());
             }
             assertEquals(names.size(), library.reader().grades(null).size());
-            assertEquals(7, library.reader().rowCounts().size());
+            assertEquals(6, library.reader().rowCounts().size());
         }
     }
 

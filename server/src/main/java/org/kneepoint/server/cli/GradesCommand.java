@@ -58,7 +58,7 @@ final class GradesCommand implements Callable<Integer> {
             out.printf("%-" + width + "s  %-18s  %s%n", "grade", "family", "curves at");
             for (GradeSummary grade : grades) {
                 out.printf("%-" + width + "s  %-18s  %s%n", grade.name(), grade.family(),
-                        String.join(", ", grade.temperaturesK().stream().map(Temperatures::celsius).toList()));
+                        Temperatures.list(grade.temperaturesK()));
             }
         }
         out.flush();

@@ -58,7 +58,7 @@ public final class ImportView {
                 GradeInfo grade = batch.grades().get(0);
                 out.append("grade '").append(grade.name()).append("' (").append(grade.family()).append("), ")
                         .append(batch.info().curves()).append(batch.info().curves() == 1 ? " curve" : " curves").append(" at ")
-                        .append(String.join(", ", temperatures(batch).stream().map(Temperatures::celsius).toList()))
+                        .append(Temperatures.list(temperatures(batch)))
                         .append(", ").append(batch.info().points()).append(" points");
             } else {
                 out.append(batch.info().susceptibilityPoints()).append(" susceptibility points of '")
