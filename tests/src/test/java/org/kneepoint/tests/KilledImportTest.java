@@ -3,11 +3,8 @@ package org.kneepoint.tests;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.BufferedWriter;
-import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
@@ -31,7 +28,7 @@ class KilledImportTest {
         try (Library library = Library.open(DatabaseLocation.ofFolder(libraryFolder))) {
             before = library.reader().rowCounts();
         }
-        Path big = writeLargeFile(folder.resolve("large.csv"), 50, 20_000);
+        Path big = LargeCurveFile.write(folder.resolve("large.csv"), 100, 20_000);
         Path databaseFile = libraryFolder.resolve("kneepoint.mv.db");
         long sizeBefore = Files.size(databaseFile);
 
@@ -39,8 +36,8 @@ class KilledImportTest {
                 "-jar", JAR.toString(), "import", big.toString(), "--db", libraryFolder.toString())
                 .redirectOutput(folder.resolve("child-out.txt").toFile()).redirectError(folder.resolve("child-err.txt").toFile()).start();
         long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(120);
-        while (child.isAlive() && Files.size(databaseFile) < sizeBefore + 2_000_000 && System.nanoTime() < deadline) {
-            Thread.sleep(20);
+        while (child.isAlive() && Files.size(databaseFile) < sizeBefore + 300_000 && System.nanoTime() < deadline) {
+            Thread.sleep(2);
         }
         assertTrue(child.isAlive(), "the import was still running when it was killed: " + Files.readString(folder.resolve("child-err.txt")));
         child.destroyForcibly();
@@ -54,22 +51,4 @@ class KilledImportTest {
         CliRun grades = CliRun.of("grades", "--json", "--db", libraryFolder.toString());
         assertEquals(0, grades.exitCode(), grades.err());
     }
-
-    /** {@code curves} invented curves of {@code points} points each, in the long layout (a T column). */
-    static Path writeLargeFile(Path file, int curves, int points) throws IOException {
-        try (BufferedWriter out = Files.newBufferedWriter(file)) {
-            out.write("# grade: Invented large grade\n# family: invented family\n# source: invented for a test\n");
-            out.write("T [K],H [A/m],J [T]\n");
-            for (int c = 0; c < curves; c++) {
-                double temperature = 250 + 4 * c;
-                for (int i = 0; i < points; i++) {
-                    double h = 1e5 - 1.7e6 * i / (points - 1.0);
-                    double j = h <= -1.5e6 ? 0 : (1.3 + 6.3e-8 * h) * (1 - Math.exp(-(h + 1.5e6) / 4e4));
-                    out.write(String.format(Locale.ROOT, "%.2f,%.3f,%.6f%n", temperature, h, j));
-                }
-            }
-        }
-        return file;
-    }
-
 }
