@@ -225,6 +225,20 @@ class LibraryCommandsTest {
     }
 
     @Test
+    void control_characters_in_names_never_reach_the_terminal_raw() throws IOException {
+        String name = "Red\u001b[31m grade\u0007";
+        String json = "{\"grade\": \"" + name.replace("\u001b", "\\u001b").replace("\u0007", "\\u0007")
+                + "\", \"family\": \"invented\", \"temperature\": \"20 °C\", \"columns\": [\"H [kA/m]\", \"J [T]\"],"
+                + " \"rows\": [[50, 1.2913], [0, 1.2888], [-400, 1.2636], [-800, 1.2382], [-1500, 0]]}";
+        assertEquals(0, CliRun.of("import", file("escape.json", json).toString(), "--db", db()).exitCode());
+        CliRun table = CliRun.of("grades", "--db", db());
+        assertFalse(table.out().contains("\u001b"), table.out());
+        assertTrue(table.out().contains("Red\\u001b[31m grade\\u0007"), table.out());
+        JsonNode listed = new ObjectMapper().readTree(CliRun.of("grades", "--json", "--db", db()).out());
+        assertEquals(name, listed.get(0).get("name").asText());
+    }
+
+    @Test
     void export_refuses_bad_requests_and_writes_no_file() throws IOException {
         CliRun.of("import", file("n40.csv", CURVE_SI).toString(), "--db", db());
         Path target = folder.resolve("out.csv");

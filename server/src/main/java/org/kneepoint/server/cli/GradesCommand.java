@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.library.GradeSummary;
 import org.kneepoint.server.text.Json;
+import org.kneepoint.server.text.PlainText;
 import org.kneepoint.server.text.Temperatures;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -57,7 +58,7 @@ final class GradesCommand implements Callable<Integer> {
             int width = Math.min(40, grades.stream().mapToInt(grade -> grade.name().length()).max().orElse(5));
             out.printf("%-" + width + "s  %-18s  %s%n", "grade", "family", "curves at");
             for (GradeSummary grade : grades) {
-                out.printf("%-" + width + "s  %-18s  %s%n", grade.name(), grade.family(),
+                out.printf("%-" + width + "s  %-18s  %s%n", PlainText.printable(grade.name()), PlainText.printable(grade.family()),
                         Temperatures.list(grade.temperaturesK()));
             }
         }

@@ -51,7 +51,7 @@ public final class CharacterizationView {
     /** A readable table of one characterization. */
     public static String table(String source, DemagnetizationCurve curve, Characterization c) {
         StringBuilder out = new StringBuilder();
-        out.append(source).append(": ").append(curve.kind().name().toLowerCase()).append(" curve, ")
+        out.append(PlainText.printable(source)).append(": ").append(curve.kind().name().toLowerCase()).append(" curve, ")
                 .append(curve.size()).append(" points, ")
                 .append(c.temperatureK() == null ? "temperature not given" : QuantityFormatter.format(c.temperatureK(), CELSIUS, 5))
                 .append('\n');

@@ -47,7 +47,7 @@ public final class ImportView {
     public static String table(List<ImportPlan> plans, boolean dryRun) {
         StringBuilder out = new StringBuilder();
         for (ImportPlan plan : plans) {
-            out.append(plan.fileName()).append(": ");
+            out.append(PlainText.printable(plan.fileName())).append(": ");
             if (plan.alreadyImported()) {
                 out.append("already imported at ").append(plan.earlier().importedAt())
                         .append(" as ").append(plan.earlier().fileName()).append(" (same SHA-256); skipped\n");
@@ -56,13 +56,13 @@ public final class ImportView {
             ImportBatch batch = plan.batch();
             if (!batch.grades().isEmpty()) {
                 GradeInfo grade = batch.grades().get(0);
-                out.append("grade '").append(grade.name()).append("' (").append(grade.family()).append("), ")
+                out.append("grade '").append(PlainText.printable(grade.name())).append("' (").append(PlainText.printable(grade.family())).append("), ")
                         .append(batch.info().curves()).append(batch.info().curves() == 1 ? " curve" : " curves").append(" at ")
                         .append(Temperatures.list(temperatures(batch)))
                         .append(", ").append(batch.info().points()).append(" points");
             } else {
                 out.append(batch.info().susceptibilityPoints()).append(" susceptibility points of '")
-                        .append(batch.susceptibility().get(0).material()).append("'");
+                        .append(PlainText.printable(batch.susceptibility().get(0).material())).append("'");
             }
             out.append(dryRun ? ": valid\n" : ": imported\n");
         }
