@@ -8,7 +8,9 @@ import org.kneepoint.fitter.error.BadInputException;
  * The linear temperature law: Br(T) = Br0·(1 + α·(T − T0)), HcJ(T) = HcJ0·(1 + β·(T − T0)), with μrec
  * and the knee's relative width w/HcJ held constant (the form of the Modelica FluxTubes HardMagnetic
  * records, Br(T) = BrRef·(1 + α·(T − Tref)); REFERENCES §6b). α and β are in 1/K. The model's range
- * is where Br, HcJ and the recoil line's J at −HcJ all stay positive, within 1 K to T0 + 2000 K.
+ * is where Br, HcJ and the recoil line's J at −HcJ all stay positive, within 1 K to T0 + 800 K (no
+ * commercial magnet material keeps its magnetization that far: the Curie points of Sm2Co17 lie near
+ * 800–850 °C; from memory).
  *
  * @param reference            the curve at T0
  * @param alpha                α of Br, 1/K
@@ -22,7 +24,7 @@ public record LinearTemperatureLaw(LinearRecoilKnee reference, double alpha, dou
     public static final double DEFAULT_REFERENCE_TEMPERATURE = 293.15;
 
     private static final double RANGE_MARGIN = 1e-6;
-    private static final double WIDEST_SPAN = 2000.0;
+    private static final double WIDEST_SPAN = 800.0;
 
     public LinearTemperatureLaw {
         if (reference == null) {
