@@ -8,7 +8,8 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionInfo.class,
         description = "Demagnetization curves, fits and design checks for permanent magnets.",
-        subcommands = {CurveCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {CurveCommand.class, PermeanceCommand.class, FieldCommand.class, CheckCommand.class, DutyCommand.class,
+            CommandLine.HelpCommand.class})
 public final class KneepointCommand implements Runnable {
 
     @CommandLine.Spec
