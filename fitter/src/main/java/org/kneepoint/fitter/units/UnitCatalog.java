@@ -1,5 +1,6 @@
 package org.kneepoint.fitter.units;
 
+import static org.kneepoint.fitter.units.Dimension.AREA;
 import static org.kneepoint.fitter.units.Dimension.DENSITY;
 import static org.kneepoint.fitter.units.Dimension.ENERGY_PRODUCT;
 import static org.kneepoint.fitter.units.Dimension.FIELD_STRENGTH;
@@ -19,7 +20,7 @@ import java.util.Optional;
  * Every unit Kneepoint understands, with its SI factor.
  *
  * <p>Factors: NIST Special Publication 811 (A. Thompson, B. N. Taylor, 2008), Appendix B.8 and
- * B.9 — 1 Oe = 1000/(4π) A/m, 1 G = 1e-4 T, 1 in = 0.0254 m, t/°C = T/K − 273.15,
+ * B.9 — 1 Oe = 1000/(4π) A/m, 1 G = 1e-4 T, 1 in = 0.0254 m (so 1 in² = 6.4516e-4 m²), t/°C = T/K − 273.15,
  * t/°F = 1.8·t/°C + 32 — and the CGS–SI table for magnetic quantities ("Units for magnetic
  * properties", IEEE Trans. Magn. author guide, Table I): 1 emu/cm³ = 1e3 A/m; 1 MGOe =
  * 100/(4π) kJ/m³; volume susceptibility χ_SI = 4π·χ_CGS; mass 1 cm³/g = 4π·1e-3 m³/kg; molar
@@ -65,7 +66,11 @@ public final class UnitCatalog {
             Unit.of("kg/m³", DENSITY, 1.0, "kg/m3"),
             Unit.of("g/cm³", DENSITY, 1e3, "g/cm3", "g/cc"),
             Unit.of("kg/mol", MOLAR_MASS, 1.0),
-            Unit.of("g/mol", MOLAR_MASS, 1e-3));
+            Unit.of("g/mol", MOLAR_MASS, 1e-3),
+            Unit.of("m²", AREA, 1.0, "m2"),
+            Unit.of("cm²", AREA, 1e-4, "cm2"),
+            Unit.of("mm²", AREA, 1e-6, "mm2"),
+            Unit.of("in²", AREA, 0.0254 * 0.0254, "in2"));
 
     private UnitCatalog() {
     }

@@ -9,7 +9,9 @@ import picocli.CommandLine.Command;
         versionProvider = VersionInfo.class,
         description = "Demagnetization curves, fits and design checks for permanent magnets.",
         subcommands = {CurveCommand.class, ImportCommand.class, GradesCommand.class, ExportCommand.class,
-            BackupCommand.class, RestoreCommand.class, DemoCommand.class, CommandLine.HelpCommand.class})
+            BackupCommand.class, RestoreCommand.class, DemoCommand.class,
+            PermeanceCommand.class, FieldCommand.class, CheckCommand.class, DutyCommand.class,
+            CommandLine.HelpCommand.class})
 public final class KneepointCommand implements Runnable {
 
     @CommandLine.Spec

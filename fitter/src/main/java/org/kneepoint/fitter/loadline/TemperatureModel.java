@@ -1,0 +1,23 @@
+package org.kneepoint.fitter.loadline;
+
+/**
+ * A grade's intrinsic curve as a function of temperature (kelvin): the seam where a fitted
+ * temperature model plugs in. {@link LinearTemperatureLaw} is the linear law in use until then.
+ */
+public interface TemperatureModel {
+
+    /** The curve at {@code temperature} K, inside [{@link #lowestTemperature()}, {@link #highestTemperature()}]. */
+    IntrinsicCurve at(double temperature);
+
+    /** T0, K: the temperature the coefficients refer to and losses are reported at. */
+    double referenceTemperature();
+
+    /** Br(T)/Br(T0), the reversible change of remanence. */
+    double remanenceRatio(double temperature);
+
+    /** Lowest temperature the model describes, K. */
+    double lowestTemperature();
+
+    /** Highest temperature the model describes, K. */
+    double highestTemperature();
+}
