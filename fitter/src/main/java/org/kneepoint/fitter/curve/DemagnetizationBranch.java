@@ -152,8 +152,8 @@ public final class DemagnetizationBranch {
         return flux ? MU0 * h[k] + monotoneJ[k] : monotoneJ[k];
     }
 
-    /** The merged measured points (H, J) with H in {@code [from, to]}, for straight-line fits. */
-    double[][] measuredBetween(double from, double to) {
+    /** The merged measured points (H, J) with H in {@code [from, to]}, ascending in H, for fits. */
+    public double[][] measuredBetween(double from, double to) {
         int start = 0;
         while (start < h.length && h[start] < from) {
             start++;

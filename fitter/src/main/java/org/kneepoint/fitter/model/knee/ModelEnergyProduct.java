@@ -1,0 +1,33 @@
+package org.kneepoint.fitter.model.knee;
+
+import static org.kneepoint.fitter.units.MagneticConstant.MU0;
+
+import org.kneepoint.fitter.loadline.LinearRecoilKnee;
+
+/** (BH)max of a knee model: the maximum of −H·(μ0·H + J(H)) between HcB and 0, by golden-section search. */
+final class ModelEnergyProduct {
+
+    private static final double GOLDEN = (Math.sqrt(5) - 1) / 2;
+
+    private ModelEnergyProduct() {
+    }
+
+    static double maximum(LinearRecoilKnee model) {
+        double left = model.operatingField(0.0, 0.0);
+        double right = 0.0;
+        for (int i = 0; i < 200 && right - left > 1e-10 * -model.operatingField(0.0, 0.0); i++) {
+            double a = right - GOLDEN * (right - left);
+            double b = left + GOLDEN * (right - left);
+            if (product(model, a) >= product(model, b)) {
+                right = b;
+            } else {
+                left = a;
+            }
+        }
+        return product(model, 0.5 * (left + right));
+    }
+
+    private static double product(LinearRecoilKnee model, double h) {
+        return -h * (MU0 * h + model.j(h));
+    }
+}
