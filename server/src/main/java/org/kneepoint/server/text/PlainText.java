@@ -2,7 +2,7 @@ package org.kneepoint.server.text;
 
 /**
  * Makes stored text safe to print in a terminal table: control characters (which could move the
- * cursor or recolour the terminal) are shown as {@code \uXXXX} escapes; everything else, any
+ * cursor or recolour the terminal) are shown as backslash-u escapes (such as the escape of U+001B); everything else, any
  * script included, is printed as it is.
  */
 public final class PlainText {
