@@ -42,7 +42,7 @@ public final class CurveTables {
                 h[i] = field;
                 values[i] = quantity == Quantity.B ? branch.b(field) : branch.j(field);
             }
-            description = points + " points evenly spaced in H on the monotone interpolant of the stored curve";
+            description = points + " points evenly spaced in H on the monotone interpolant of the curve";
         }
         if (shifted) {
             OptionalDouble hcbField = DemagnetizationBranch.of(curve).fieldAtB(0.0);

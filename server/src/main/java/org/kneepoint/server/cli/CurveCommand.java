@@ -13,6 +13,8 @@ import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.importer.csv.CurveFile;
 import org.kneepoint.importer.csv.CurveFileReader;
 import org.kneepoint.importer.csv.ReadLimits;
+import org.kneepoint.server.library.GradeCurve;
+import org.kneepoint.server.library.GradeCurves;
 import org.kneepoint.server.text.CharacterizationView;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
@@ -52,24 +54,21 @@ final class CurveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        List<DemagnetizationCurve> curves = new ArrayList<>();
-        String source;
+        List<GradeCurve> curves = new ArrayList<>();
         if (temperatureK == null) {
             CurveFile file = new CurveFileReader(SizeLimit.of(maxFileSize)).read(Path.of(target));
-            source = file.source();
-            curves.addAll(file.curves());
+            file.curves().forEach(curve -> curves.add(new GradeCurve(file.source(), curve, file.source(), false, false)));
         } else {
-            source = target;
             try (org.kneepoint.db.Library library = libraryOption.open()) {
-                StoredCurves.at(library.reader(), target, temperatureK).forEach(stored -> curves.add(stored.curve()));
+                curves.addAll(GradeCurves.at(library.reader(), target, temperatureK));
             }
         }
         List<Map<String, Object>> documents = new ArrayList<>();
         StringBuilder tables = new StringBuilder();
-        for (DemagnetizationCurve curve : curves) {
-            Characterization characterization = characterize(source, curve);
-            documents.add(CharacterizationView.json(source, curve, characterization));
-            tables.append(CharacterizationView.table(source, curve, characterization));
+        for (GradeCurve curve : curves) {
+            Characterization characterization = characterize(curve.grade(), curve.curve());
+            documents.add(CharacterizationView.json(curve, characterization));
+            tables.append(CharacterizationView.table(curve, characterization));
         }
         var out = spec.commandLine().getOut();
         out.print(json ? Json.write(documents.size() == 1 ? documents.get(0) : documents) + System.lineSeparator() : tables);

@@ -11,7 +11,8 @@ import org.kneepoint.fitter.curve.CurveTable;
 import org.kneepoint.fitter.curve.CurveTables;
 import org.kneepoint.fitter.curve.Quantity;
 import org.kneepoint.fitter.library.GradeInfo;
-import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.server.library.GradeCurve;
+import org.kneepoint.server.library.GradeCurves;
 import org.kneepoint.importer.export.CurveExportWriter;
 import org.kneepoint.importer.export.ExportHeader;
 import org.kneepoint.importer.export.ExportUnits;
@@ -26,8 +27,8 @@ import picocli.CommandLine.Model.CommandSpec;
 /**
  * {@code kneepoint export GRADE --temperature T}: a grade's curve at T as CSV (re-readable by
  * {@code import}), JSON or a bare table, in SI or CGS, as stored or resampled, optionally shifted
- * so that B = 0 at H = 0. The curve comes from {@link StoredCurves}; the modeled curve at any
- * temperature will come from the same place once the temperature model exists.
+ * so that B = 0 at H = 0. The curve is the stored one at T, or else the temperature model's
+ * ({@link GradeCurves}), marked modeled and, outside the measured temperatures, extrapolated.
  */
 @Command(name = "export", mixinStandardHelpOptions = true, description = "Export a grade's curve at a temperature.")
 final class ExportCommand implements Callable<Integer> {
@@ -74,10 +75,10 @@ final class ExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        LibraryCurve stored;
+        GradeCurve stored;
         GradeInfo info;
         try (Library library = libraryOption.open()) {
-            List<LibraryCurve> curves = StoredCurves.at(library.reader(), grade, temperatureK);
+            List<GradeCurve> curves = GradeCurves.at(library.reader(), grade, temperatureK);
             stored = curves.stream().min(Comparator.comparing(c -> c.curve().kind() == CurveKind.LOOP)).orElseThrow();
             info = library.reader().grade(grade).orElseThrow();
         }
@@ -87,9 +88,10 @@ final class ExportCommand implements Callable<Integer> {
         Quantity quantity = curve == CurveChoice.normal ? Quantity.B : Quantity.J;
         CurveTable table = CurveTables.of(stored.curve(), quantity, points, shifted);
         ExportUnits exportUnits = units == UnitChoice.si ? ExportUnits.SI : ExportUnits.CGS;
-        String notes = String.format(Locale.ROOT, "exported by kneepoint %s from the stored %s curve at %s: %s",
-                VersionInfo.version(), stored.curve().kind().name().toLowerCase(Locale.ROOT),
-                Temperatures.celsius(stored.curve().temperatureK()), table.description());
+        String notes = String.format(Locale.ROOT, "exported by kneepoint %s from the %s %s curve at %s%s: %s",
+                VersionInfo.version(), stored.modeled() ? "modeled" : "stored", stored.curve().kind().name().toLowerCase(Locale.ROOT),
+                Temperatures.celsius(stored.curve().temperatureK()),
+                stored.extrapolated() ? " (EXTRAPOLATED beyond the measured temperatures)" : "", table.description());
         ExportHeader header = new ExportHeader(info.name(), info.family(), stored.curve().temperatureK(),
                 quantity == Quantity.B ? "normal" : "intrinsic", stored.source(), notes);
         String text = bare ? CurveExportWriter.bare(table, exportUnits)

@@ -4,6 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import org.kneepoint.fitter.curve.Characterization;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
+import org.kneepoint.server.library.GradeCurve;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityFormatter;
 import org.kneepoint.fitter.units.Unit;
@@ -25,9 +26,12 @@ public final class CharacterizationView {
     }
 
     /** The JSON object of one characterization, keys in a fixed order. */
-    public static Map<String, Object> json(String source, DemagnetizationCurve curve, Characterization c) {
+    public static Map<String, Object> json(GradeCurve gradeCurve, Characterization c) {
+        DemagnetizationCurve curve = gradeCurve.curve();
         Map<String, Object> json = new LinkedHashMap<>();
-        json.put("source", source);
+        json.put("source", gradeCurve.grade());
+        json.put("modeled", gradeCurve.modeled());
+        json.put("extrapolated", gradeCurve.extrapolated());
         json.put("kind", curve.kind().name().toLowerCase());
         json.put("points", curve.size());
         json.put("temperatureK", c.temperatureK());
@@ -49,11 +53,14 @@ public final class CharacterizationView {
     }
 
     /** A readable table of one characterization. */
-    public static String table(String source, DemagnetizationCurve curve, Characterization c) {
+    public static String table(GradeCurve gradeCurve, Characterization c) {
+        DemagnetizationCurve curve = gradeCurve.curve();
         StringBuilder out = new StringBuilder();
-        out.append(PlainText.printable(source)).append(": ").append(curve.kind().name().toLowerCase()).append(" curve, ")
+        out.append(PlainText.printable(gradeCurve.grade())).append(": ")
+                .append(gradeCurve.modeled() ? "modeled " : "").append(curve.kind().name().toLowerCase()).append(" curve, ")
                 .append(curve.size()).append(" points, ")
                 .append(c.temperatureK() == null ? "temperature not given" : QuantityFormatter.format(c.temperatureK(), CELSIUS, 5))
+                .append(gradeCurve.extrapolated() ? " (EXTRAPOLATED beyond the measured temperatures)" : "")
                 .append('\n');
         row(out, "Br", QuantityFormatter.format(c.br(), TESLA, 4));
         row(out, "HcB", field(c.hcb()));
