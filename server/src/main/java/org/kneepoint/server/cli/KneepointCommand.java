@@ -8,7 +8,7 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionInfo.class,
         description = "Demagnetization curves, fits and design checks for permanent magnets.",
-        subcommands = {CurveCommand.class, JilesAthertonCommand.class, CommandLine.HelpCommand.class})
+        subcommands = {CurveCommand.class, FitCommand.class, JilesAthertonCommand.class, CommandLine.HelpCommand.class})
 public final class KneepointCommand implements Runnable {
 
     @CommandLine.Spec
