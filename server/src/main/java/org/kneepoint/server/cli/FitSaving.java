@@ -33,6 +33,13 @@ final class FitSaving {
         }
     }
 
+    static void requireMaterial(Library library, String material, String source) {
+        if (library.reader().susceptibility(material).isEmpty()) {
+            throw new BadInputException(InputLocation.of("option --save"), "material '" + material + "' of " + source
+                    + " has no susceptibility in the library at " + library.location().describe() + "; import it first");
+        }
+    }
+
     /** A record of a fit made now by this program version; the parameters become a compact JSON object. */
     static FitRecord record(String grade, Double curveTemperatureK, String curveKind, String material, String model,
             Map<String, Object> parameters, double residual) {
