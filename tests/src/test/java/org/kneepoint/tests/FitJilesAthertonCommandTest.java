@@ -76,6 +76,9 @@ class FitJilesAthertonCommandTest {
         assertEquals("normal", json.get("curveKind").asText());
         assertEquals(20_000, json.get("magnetizingField").asDouble(), 1e-9);
         assertTrue(json.get("rmsB").asDouble() < 1e-3, "noise-free data fit closely: " + json.get("rmsB"));
+        CliRun table = CliRun.of("fit", "ja", file.toString(), "--magnetizing-field", "20kA/m");
+        assertTrue(table.out().startsWith("second.csv: Jiles–Atherton fit to the second-quadrant curve after magnetizing"
+                + " at 20 kA/m\n"), table.out());
     }
 
     @Test

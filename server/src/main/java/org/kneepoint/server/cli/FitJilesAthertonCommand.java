@@ -10,6 +10,10 @@ import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.model.ja.FitProgress;
 import org.kneepoint.fitter.model.ja.JilesAthertonFit;
 import org.kneepoint.fitter.model.ja.JilesAthertonFitter;
+import org.kneepoint.fitter.units.Dimension;
+import org.kneepoint.fitter.units.QuantityFormatter;
+import org.kneepoint.fitter.units.Unit;
+import org.kneepoint.fitter.units.UnitCatalog;
 import org.kneepoint.server.text.JilesAthertonFitView;
 import org.kneepoint.server.text.Json;
 import org.kneepoint.server.text.ProgressBar;
@@ -29,6 +33,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "ja", mixinStandardHelpOptions = true, sortOptions = false,
         description = "Fit Jiles–Atherton parameters Ms, a, k, c, α to a loop or a second-quadrant curve.")
 final class FitJilesAthertonCommand implements Callable<Integer> {
+
+    private static final Unit KILO_AMPERE = UnitCatalog.require("kA/m", Dimension.FIELD_STRENGTH);
 
     @Spec
     private CommandSpec spec;
@@ -106,7 +112,7 @@ final class FitJilesAthertonCommand implements Callable<Integer> {
             out.println(Json.write(document));
         } else {
             String title = data.source() + ": Jiles–Atherton fit to the " + (data.isLoop() ? "loop" : "second-quadrant curve")
-                    + (data.magnetizingField() == null ? "" : " after magnetizing at " + data.magnetizingField() + " A/m")
+                    + (data.magnetizingField() == null ? "" : " after magnetizing at " + QuantityFormatter.format(data.magnetizingField(), KILO_AMPERE, 5))
                     + (save ? " (saved to the library)" : "");
             out.print(JilesAthertonFitView.table(title, fit));
         }
