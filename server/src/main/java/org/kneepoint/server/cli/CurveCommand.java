@@ -38,7 +38,7 @@ final class CurveCommand implements Callable<Integer> {
     @Parameters(paramLabel = "FILE|GRADE", description = "A curve file (header row with units, e.g. 'H [kOe],J [kG]'), or a grade with --temperature.")
     private String target;
 
-    @Option(names = "--temperature", paramLabel = "T", converter = TemperatureConverter.class,
+    @Option(names = "--temperature", paramLabel = "T", converter = QuantityConverters.Temperature.class,
             description = "Characterize the stored curves of the grade GRADE at this temperature, e.g. 120C.")
     private Double temperatureK;
 

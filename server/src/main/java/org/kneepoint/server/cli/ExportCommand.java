@@ -48,7 +48,7 @@ final class ExportCommand implements Callable<Integer> {
     @Parameters(paramLabel = "GRADE", description = "The grade's name.")
     private String grade;
 
-    @Option(names = "--temperature", required = true, converter = TemperatureConverter.class, paramLabel = "T",
+    @Option(names = "--temperature", required = true, converter = QuantityConverters.Temperature.class, paramLabel = "T",
             description = "Temperature of the curve, e.g. 120C.")
     private double temperatureK;
 

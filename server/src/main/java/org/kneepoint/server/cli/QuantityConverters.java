@@ -42,11 +42,23 @@ final class QuantityConverters {
         }
     }
 
-    /** A temperature, e.g. "120C", "393.15 K" or "248F"; returned in kelvin. */
+    /** A temperature, e.g. "120C", "393.15 K" or "248F"; returned in kelvin, above absolute zero. */
     static final class Temperature implements CommandLine.ITypeConverter<Double> {
         @Override
         public Double convert(String text) {
-            return parse(text, Dimension.TEMPERATURE);
+            double kelvin = parse(text, Dimension.TEMPERATURE);
+            if (!(kelvin > 0)) {
+                throw new TypeConversionException("expected a temperature above absolute zero, got '" + text.strip() + "'");
+            }
+            return kelvin;
+        }
+    }
+
+    /** A magnetization, e.g. "1.6e6A/m" or "1270 emu/cm³". */
+    static final class Magnetization implements CommandLine.ITypeConverter<Double> {
+        @Override
+        public Double convert(String text) {
+            return parse(text, Dimension.MAGNETIZATION);
         }
     }
 

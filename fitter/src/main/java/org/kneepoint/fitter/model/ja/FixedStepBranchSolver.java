@@ -40,13 +40,20 @@ public final class FixedStepBranchSolver implements BranchSolver {
         return m;
     }
 
-    /** One classical RK4 step of dM/dH from (h, m) over {@code step}. */
+    /**
+     * One classical RK4 step of dM/dH from (h, m) over {@code step}. Each stage's reduced field
+     * x = (H + α·M)/a is formed as x(H_stage, m) + (α/a)·Δm with one multiply-add, so that only
+     * that multiply-add, not the whole of x, lies between one stage's slope and the next stage.
+     */
     static double rungeKuttaStep(JilesAthertonModel model, double h, double m, double step, double direction) {
         double half = 0.5 * step;
-        double k1 = model.susceptibility(h, m, direction);
-        double k2 = model.susceptibility(h + half, m + half * k1, direction);
-        double k3 = model.susceptibility(h + half, m + half * k2, direction);
-        double k4 = model.susceptibility(h + step, m + step * k3, direction);
-        return m + step / 6 * (k1 + 2 * k2 + 2 * k3 + k4);
+        double perMagnetization = model.reducedFieldPerMagnetization();
+        double middle = model.reducedField(h + half, m);
+        double end = model.reducedField(h + step, m);
+        double k1 = model.susceptibilityAt(model.reducedField(h, m), m, direction);
+        double k2 = model.susceptibilityAt(Math.fma(perMagnetization * half, k1, middle), m + half * k1, direction);
+        double k3 = model.susceptibilityAt(Math.fma(perMagnetization * half, k2, middle), m + half * k2, direction);
+        double k4 = model.susceptibilityAt(Math.fma(perMagnetization * step, k3, end), m + step * k3, direction);
+        return Math.fma(step / 6, k1 + 2 * k2 + 2 * k3 + k4, m);
     }
 }

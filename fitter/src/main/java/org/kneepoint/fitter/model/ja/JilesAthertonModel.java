@@ -26,6 +26,8 @@ public final class JilesAthertonModel {
     private final double inverseK;
     private final double c;
     private final double alpha;
+    private final double reversibleScale;
+    private final double alphaOverA;
 
     public JilesAthertonModel(JilesAthertonParameters parameters) {
         this.parameters = parameters;
@@ -34,6 +36,8 @@ public final class JilesAthertonModel {
         this.inverseK = 1 / parameters.k();
         this.c = parameters.c();
         this.alpha = parameters.alpha();
+        this.reversibleScale = c * ms * inverseA;
+        this.alphaOverA = alpha * inverseA;
     }
 
     public JilesAthertonParameters parameters() {
@@ -59,9 +63,20 @@ public final class JilesAthertonModel {
      * e = exp(−2|x|) and D = |x|·(1 − e), L = N/D with N = (1 + e)·|x| − (1 − e),
      * L' = S/D² with S = (1 − e)² − 4e·x², and dM/dH = T/(D² − α·T) with
      * T = D·max(0, δ·(Ms·N·sign x − m·D))/k + (c·Ms/a)·S. This is algebraically the DESIGN §4 form.
+     * Multiply-adds ({@link Math#fma}, one rounding each) and a plain comparison for the floor of
+     * the denominator keep the chain from x to dM/dH short; the direction is folded into the two
+     * products of the drive, so it costs no step of its own.
      */
     public double susceptibility(double h, double m, double direction) {
-        double x = (h + alpha * m) * inverseA;
+        return susceptibilityAt(reducedField(h, m), m, direction);
+    }
+
+    /**
+     * The same dM/dH from the reduced effective field x = He/a = (H + α·M)/a, which the caller
+     * has already formed (an integrator can then build each stage's x by one multiply-add from
+     * the previous stage's slope, see {@link #reducedFieldPerMagnetization()}).
+     */
+    double susceptibilityAt(double x, double m, double direction) {
         double ax = Math.abs(x);
         if (ax < LangevinFunction.SERIES_LIMIT || ax > FUSED_LIMIT) {
             return separate(x, m, direction);
@@ -69,13 +84,24 @@ public final class JilesAthertonModel {
         double e = Math.exp(-2 * ax);
         double oneMinus = 1 - e;
         double d = ax * oneMinus;
-        double numerator = (1 + e) * ax - oneMinus;
-        double signedNumerator = x < 0 ? -numerator : numerator;
-        double drive = direction * (ms * signedNumerator - m * d);
-        double slopeNumerator = oneMinus * oneMinus - 4 * e * ax * ax;
-        double total = (drive > 0 ? d * drive * inverseK : 0) + c * ms * inverseA * slopeNumerator;
+        double numerator = Math.copySign(Math.fma(1 + e, ax, -oneMinus), x);
+        double drive = direction * ms * numerator - direction * m * d;
+        double reversible = reversibleScale * (oneMinus * oneMinus - 4 * e * ax * ax);
+        double total = drive > 0 ? Math.fma(d * inverseK, drive, reversible) : reversible;
         double dSquared = d * d;
-        return total / Math.max(dSquared - alpha * total, MINIMUM_DENOMINATOR * dSquared);
+        double denominator = Math.fma(-alpha, total, dSquared);
+        double floor = MINIMUM_DENOMINATOR * dSquared;
+        return total / (denominator > floor ? denominator : floor);
+    }
+
+    /** α/a: how much the reduced field x = (H + α·M)/a moves per A/m of M. */
+    double reducedFieldPerMagnetization() {
+        return alphaOverA;
+    }
+
+    /** The reduced effective field x = (H + α·M)/a. */
+    double reducedField(double h, double m) {
+        return Math.fma(m, alphaOverA, h * inverseA);
     }
 
     /** The same susceptibility term by term, for |x| near 0 (series) and very large |x|. */
