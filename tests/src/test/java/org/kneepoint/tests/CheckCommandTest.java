@@ -68,6 +68,15 @@ class CheckCommandTest {
         assertTrue(run.out().contains("implanted medical devices"), run.out());
     }
 
+    @Test
+    void table_for_a_shape_adds_the_local_check() {
+        CliRun run = CliRun.of(with("check", "--width", "20mm", "--depth", "20mm", "--thickness", "3mm", "--temperature", "120C",
+                "--opposing-field", "200kA/m"));
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(run.out().contains("of the volume below the knee (24 cells per edge"), run.out());
+        assertTrue(run.out().contains("lowest local H"), run.out());
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', textBlock = """
         no unit on br     | check --pc 1 --br 1.3 --mu-rec 1.05 --hcj 1600kA/m --temperature 20C

@@ -2,6 +2,8 @@ package org.kneepoint.fitter.loadline;
 
 import static org.kneepoint.fitter.units.MagneticConstant.MU0;
 
+import static org.kneepoint.fitter.curve.Characterization.KNEE_FRACTION;
+
 import java.util.OptionalDouble;
 import org.kneepoint.fitter.error.BadInputException;
 
@@ -20,9 +22,6 @@ import org.kneepoint.fitter.error.BadInputException;
  */
 public record LinearRecoilKnee(double remanence, double recoilPermeability, double intrinsicCoercivity, double kneeWidth)
         implements IntrinsicCurve {
-
-    /** Share of Br at the knee field Hk (DESIGN §2). */
-    public static final double KNEE_FRACTION = 0.9;
 
     public LinearRecoilKnee {
         positive("remanence Br", remanence, "T");

@@ -3,6 +3,7 @@ package org.kneepoint.fitter.loadline;
 import static org.kneepoint.fitter.units.MagneticConstant.MU0;
 
 import java.util.OptionalDouble;
+import org.kneepoint.fitter.curve.Characterization;
 import org.kneepoint.fitter.curve.CurveCharacterizer;
 import org.kneepoint.fitter.curve.DemagnetizationBranch;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
@@ -55,7 +56,7 @@ public final class MeasuredIntrinsicCurve implements IntrinsicCurve {
 
     @Override
     public OptionalDouble kneeField() {
-        return branch.fieldAtJ(LinearRecoilKnee.KNEE_FRACTION * remanence());
+        return branch.fieldAtJ(Characterization.KNEE_FRACTION * remanence());
     }
 
     @Override

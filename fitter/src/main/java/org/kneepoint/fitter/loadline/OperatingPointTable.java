@@ -54,11 +54,10 @@ public final class OperatingPointTable {
         }
     }
 
+    /** Forms each curve once through {@link LinearTemperatureLaw#at}, which refuses a temperature outside the law's range. */
     private static void checkRange(LinearTemperatureLaw law, double[] temperatures) {
         for (double temperature : temperatures) {
-            if (!(temperature >= law.lowestTemperature() && temperature <= law.highestTemperature())) {
-                law.at(temperature);
-            }
+            law.at(temperature);
         }
     }
 }

@@ -32,6 +32,18 @@ class IrreversibleLossTest {
     }
 
     @Test
+    void loss_just_below_the_knee_stays_under_five_percent() {
+        // just below the knee J = 0.9·Br at H = −Hk, so Br' = 0.9·Br + μ0(μrec − 1)·Hk (DESIGN §4, by hand); HD5, the field of
+        // 5 % loss, lies just beyond the knee (IEC 60404-8-1 as summarised by S. Zurek, Encyclopedia Magnetica; REFERENCES §6a)
+        LinearRecoilKnee curve = Grades.neodymium();
+        double knee = curve.kneeField().orElseThrow();
+        double h = knee * (1 + 1e-9);
+        double loss = IrreversibleLoss.after(curve, new OperatingPoint(h, curve.j(h) + MU0 * h, curve.j(h)));
+        assertEquals(0.1 - MU0 * 0.05 * 1.45e6 / 1.3, loss, 1e-6);
+        assertTrue(loss < 0.05);
+    }
+
+    @Test
     void loss_grows_monotonically_with_temperature_and_opposing_field_over_a_grid() {
         // issue 5 check: irreversible loss never falls as the magnet gets hotter or the opposing field stronger
         for (double pc : new double[] {0.3, 1.0, 3.0}) {

@@ -3,7 +3,10 @@ package org.kneepoint.server.cli;
 import java.util.concurrent.Callable;
 import org.kneepoint.fitter.loadline.DesignCheck;
 import org.kneepoint.fitter.loadline.DesignCheckResult;
+import org.kneepoint.fitter.loadline.LinearTemperatureLaw;
 import org.kneepoint.fitter.loadline.LoadLine;
+import org.kneepoint.fitter.loadline.LocalKneeCheck;
+import org.kneepoint.fitter.loadline.LocalKneeResult;
 import org.kneepoint.server.text.CheckView;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
@@ -48,10 +51,17 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LoadLine line = new LoadLine(loadLine.pc(), opposingField);
-        DesignCheckResult result = DesignCheck.of(grade.law(), line, temperature, lossLimitPercent / 100.0);
+        LinearTemperatureLaw law = grade.law();
+        DesignCheckResult result = DesignCheck.of(law, line, temperature, lossLimitPercent / 100.0);
         var out = spec.commandLine().getOut();
-        out.print(json ? Json.write(CheckView.json(result)) + System.lineSeparator()
-                : CheckView.table(loadLine.describe(), result, lossLimitPercent / 100.0));
+        if (json) {
+            out.print(Json.write(CheckView.json(result)) + System.lineSeparator());
+        } else {
+            LocalKneeResult local = loadLine.shape()
+                    .map(shape -> LocalKneeCheck.of(shape, law.at(temperature), line, LocalKneeCheck.DEFAULT_RESOLUTION))
+                    .orElse(null);
+            out.print(CheckView.table(loadLine.describe(), result, lossLimitPercent / 100.0, local));
+        }
         out.flush();
         return 0;
     }

@@ -1,5 +1,6 @@
 package org.kneepoint.server.cli;
 
+import java.util.Optional;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.shape.BlockShape;
 import org.kneepoint.fitter.shape.CylinderShape;
@@ -46,6 +47,11 @@ final class LoadLineOptions {
 
     /** Pc of the load line. */
     double pc() {
+        return shape().map(shape -> shape.demagnetizingFactors().permeanceCoefficients().coefficient(kind())).orElse(pc);
+    }
+
+    /** The magnet, free or on a steel plate, or empty when the load line was given by --pc. */
+    Optional<MagnetShape> shape() {
         boolean cylinder = diameter != null || length != null || innerDiameter != null;
         boolean block = width != null || depth != null || thickness != null;
         if ((pc != null ? 1 : 0) + (cylinder ? 1 : 0) + (block ? 1 : 0) != 1) {
@@ -56,10 +62,9 @@ final class LoadLineOptions {
             if (onSteel) {
                 throw new BadInputException("--on-steel needs a shape, not --pc");
             }
-            return pc;
+            return Optional.empty();
         }
-        MagnetShape shape = onSteel ? new MagnetOnSteelPlate(shape(cylinder)) : shape(cylinder);
-        return shape.demagnetizingFactors().permeanceCoefficients().coefficient(kind());
+        return Optional.of(onSteel ? new MagnetOnSteelPlate(flatPole(cylinder)) : flatPole(cylinder));
     }
 
     /** How the load line was given, for the table's heading. */
@@ -74,7 +79,7 @@ final class LoadLineOptions {
         return magnet + where + " (" + factor + " factor)";
     }
 
-    private FlatPoleShape shape(boolean cylinder) {
+    private FlatPoleShape flatPole(boolean cylinder) {
         if (cylinder) {
             if (diameter == null || length == null) {
                 throw new BadInputException("a cylinder needs both --diameter and --length");

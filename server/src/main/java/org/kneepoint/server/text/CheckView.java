@@ -3,6 +3,7 @@ package org.kneepoint.server.text;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import org.kneepoint.fitter.loadline.DesignCheckResult;
+import org.kneepoint.fitter.loadline.LocalKneeResult;
 import org.kneepoint.fitter.loadline.OperatingPoint;
 
 /**
@@ -36,8 +37,11 @@ public final class CheckView {
         return json;
     }
 
-    /** A readable table of one check; {@code lossLimit} is the fraction the maximum temperature was found for. */
-    public static String table(String loadLine, DesignCheckResult result, double lossLimit) {
+    /**
+     * A readable table of one check; {@code lossLimit} is the fraction the maximum temperature was found for,
+     * {@code local} the local check of the shape, or null when the load line was given by its Pc.
+     */
+    public static String table(String loadLine, DesignCheckResult result, double lossLimit, LocalKneeResult local) {
         OperatingPoint point = result.point();
         StringBuilder out = new StringBuilder();
         out.append("Design check at ").append(EngineeringUnits.celsius(result.temperature())).append(", ").append(loadLine)
@@ -51,6 +55,13 @@ public final class CheckView {
                 + EngineeringUnits.percent(result.fluxChange()) + " of B at the point (against the reference temperature)");
         row(out, "irreversible loss", EngineeringUnits.percent(result.irreversibleLoss()) + " of Br (the same share at the reference)");
         row(out, "max working temp.", maximum(result) + " for a loss limit of " + EngineeringUnits.percent(lossLimit));
+        if (local != null) {
+            row(out, "local check", EngineeringUnits.percent(local.fractionBelowKnee()) + " of the volume below the knee ("
+                    + local.resolution() + " cells per edge, " + local.cells() + " inside)");
+            row(out, "lowest local H", EngineeringUnits.field(local.worstField()) + " at x = " + EngineeringUnits.millimetres(local.worstX())
+                    + ", y = " + EngineeringUnits.millimetres(local.worstY()) + ", z = " + EngineeringUnits.millimetres(local.worstZ())
+                    + " (" + local.worstRegion().name().toLowerCase().replace('_', ' ') + ")");
+        }
         return out.append(Cautions.table()).toString();
     }
 

@@ -16,6 +16,7 @@ public final class PermeanceView {
     private PermeanceView() {
     }
 
+    /** The JSON object of one set of factors, keys in a fixed order. */
     public static Map<String, Object> json(DemagnetizingFactors factors) {
         PermeanceCoefficients pc = factors.permeanceCoefficients();
         Map<String, Object> json = new LinkedHashMap<>();
@@ -32,6 +33,7 @@ public final class PermeanceView {
         return values;
     }
 
+    /** A readable table of one set of factors under a one-line description of the magnet. */
     public static String table(String description, DemagnetizingFactors factors) {
         PermeanceCoefficients pc = factors.permeanceCoefficients();
         StringBuilder out = new StringBuilder(description).append('\n');
