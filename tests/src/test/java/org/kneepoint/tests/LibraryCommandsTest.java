@@ -197,16 +197,36 @@ class LibraryCommandsTest {
     }
 
     @Test
-    void curve_of_a_stored_grade_needs_a_stored_temperature() throws IOException {
+    void curve_of_a_stored_grade_at_another_temperature_needs_a_temperature_model() throws IOException {
         CliRun.of("import", file("n40.csv", CURVE_SI).toString(), "--db", db());
         CliRun ok = CliRun.of("curve", "Invented N40", "--temperature", "20C", "--json", "--db", db());
         assertEquals(0, ok.exitCode(), ok.err());
         assertEquals(1.2888, new ObjectMapper().readTree(ok.out()).get("br").asDouble(), 1e-3);
         CliRun missing = CliRun.of("curve", "Invented N40", "--temperature", "80C", "--db", db());
         assertEquals(2, missing.exitCode());
-        assertTrue(missing.err().contains("has no stored curve at 80 °C; it has curves at 20 °C"), missing.err());
+        assertEquals("kneepoint: grade 'Invented N40': no temperature model (a temperature model needs curves at two or more"
+                + " temperatures, got 1)", missing.err().strip());
         CliRun unknown = CliRun.of("curve", "Nothing", "--temperature", "20C", "--db", db());
         assertEquals("kneepoint: no grade named 'Nothing' in the library; 'kneepoint grades' lists them", unknown.err().strip());
+    }
+
+    @Test
+    void between_stored_temperatures_the_curve_is_modeled_and_beyond_them_flagged_extrapolated() throws IOException {
+        CliRun.of("demo", "--db", db());
+        JsonNode between = new ObjectMapper().readTree(CliRun.of("curve", "DEMO NdFeB 40/160", "--temperature", "100C", "--json",
+                "--db", db()).out());
+        assertTrue(between.get("modeled").asBoolean());
+        assertFalse(between.get("extrapolated").asBoolean());
+        JsonNode at80 = new ObjectMapper().readTree(CliRun.of("curve", "DEMO NdFeB 40/160", "--temperature", "80C", "--json",
+                "--db", db()).out());
+        JsonNode at120 = new ObjectMapper().readTree(CliRun.of("curve", "DEMO NdFeB 40/160", "--temperature", "120C", "--json",
+                "--db", db()).out());
+        assertFalse(at80.get(0) == null ? at80.get("modeled").asBoolean() : at80.get(0).get("modeled").asBoolean());
+        double hcj80 = (at80.isArray() ? at80.get(0) : at80).get("hcj").asDouble();
+        double hcj120 = (at120.isArray() ? at120.get(0) : at120).get("hcj").asDouble();
+        assertTrue(between.get("hcj").asDouble() < hcj80 && between.get("hcj").asDouble() > hcj120, between.toString());
+        CliRun beyond = CliRun.of("curve", "DEMO NdFeB 40/160", "--temperature", "180C", "--db", db());
+        assertTrue(beyond.out().contains("EXTRAPOLATED"), beyond.out());
     }
 
     @Test
