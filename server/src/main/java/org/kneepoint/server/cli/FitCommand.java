@@ -9,7 +9,7 @@ import picocli.CommandLine.Spec;
 /** {@code kneepoint fit MODEL ...}: fits a model to a file or to data stored in the library. */
 @Command(name = "fit", mixinStandardHelpOptions = true,
         description = "Fit a model to a file or to data stored in the library.",
-        subcommands = {FitJilesAthertonCommand.class, FitCurieWeissCommand.class})
+        subcommands = {FitKneeCommand.class, FitTemperatureCommand.class, FitJilesAthertonCommand.class, FitCurieWeissCommand.class})
 final class FitCommand implements Callable<Integer> {
 
     @Spec
