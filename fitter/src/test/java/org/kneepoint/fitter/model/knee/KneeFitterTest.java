@@ -27,9 +27,12 @@ class KneeFitterTest {
         return DemagnetizationCurve.of(Quantity.J, h, values, 293.15);
     }
 
-    /** Invented sintered-like curve of a formula unlike the model's: (Br + μ0(μrec − 1)H)·(1 − exp(−(H + HcJ)/w)). */
+    /**
+     * Invented sintered-like curve of a formula unlike the model's: (Br + μ0(μrec − 1)H)·(1 − exp(−(H + HcJ)/w)),
+     * which passes J = 0 at −HcJ and turns negative beyond, as a measured curve does.
+     */
     static double multiplicativeKnee(double h, double br, double muRec, double hcj, double width) {
-        return h <= -hcj ? 0 : (br + MU0 * (muRec - 1) * h) * (1 - Math.exp(-(h + hcj) / width));
+        return (br + MU0 * (muRec - 1) * h) * (1 - Math.exp(-(h + hcj) / width));
     }
 
     @Test
@@ -56,7 +59,7 @@ class KneeFitterTest {
     // curve's own Br, HcJ, Hk and μrec (as characterized from the data) closely.
     @Test
     void fit_follows_a_square_sintered_curve_of_another_formula() {
-        DemagnetizationCurve curve = sampled(h -> multiplicativeKnee(h, 1.42, 1.04, 1.1e6, 0.01 * 1.1e6), 5e4, -1.2e6, 500, 0, 1);
+        DemagnetizationCurve curve = sampled(h -> multiplicativeKnee(h, 1.42, 1.04, 1.1e6, 0.01 * 1.1e6), 5e4, -1.11e6, 500, 0, 1);
         var characterized = CurveCharacterizer.characterize(curve);
         KneeFit fit = KneeFitter.fit(curve);
         assertEquals(characterized.br(), fit.model().remanence(), 0.002 * characterized.br());
@@ -69,7 +72,7 @@ class KneeFitterTest {
 
     @Test
     void fit_follows_a_round_ferrite_curve_of_another_formula() {
-        DemagnetizationCurve curve = sampled(h -> multiplicativeKnee(h, 0.40, 1.10, 2.6e5, 0.12 * 2.6e5), 1e4, -2.8e5, 300, 0, 1);
+        DemagnetizationCurve curve = sampled(h -> multiplicativeKnee(h, 0.40, 1.10, 2.6e5, 0.12 * 2.6e5), 1e4, -2.7e5, 300, 0, 1);
         var characterized = CurveCharacterizer.characterize(curve);
         KneeFit fit = KneeFitter.fit(curve);
         assertEquals(characterized.br(), fit.model().remanence(), 0.005 * characterized.br());
@@ -90,6 +93,27 @@ class KneeFitterTest {
         assertThrows(BadInputException.class, () -> KneeFitter.fit(
                 DemagnetizationCurve.of(Quantity.J, new double[] {0, -1e5}, new double[] {1.2, 1.2}, null)));
         assertThrows(BadInputException.class, () -> KneeFitter.fit(sampled(h -> 1.2, 1e4, -1e6, 50, 0, 1)));
-        assertThrows(BadInputException.class, () -> KneeFitter.fit(sampled(h -> 0.0, 1e4, -1e6, 50, 0.01, 1)));
+        // Noise only: refused as bad input or as a fit that cannot converge, either way with a clear message.
+        assertThrows(org.kneepoint.fitter.error.KneepointException.class, () -> KneeFitter.fit(sampled(h -> 0.0, 1e4, -1e6, 50, 0.01, 1)));
+    }
+
+    // Reference library: Commons Math's LevenbergMarquardtOptimizer on the same model and data must
+    // land on the same parameters as the project's own 4-parameter optimizer.
+    @Test
+    void the_fit_agrees_with_commons_math_levenberg_marquardt() {
+        DemagnetizationCurve curve = sampled(h -> multiplicativeKnee(h, 1.3, 1.05, 1.6e6, 5e4), 5e4, -1.62e6, 500, 0.001, 3);
+        KneeFit fit = KneeFitter.fit(curve);
+        double[][] data = org.kneepoint.fitter.curve.DemagnetizationBranch.of(curve).measuredBetween(fit.lowestH(), fit.highestH());
+        var optimum = new org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer().optimize(
+                new org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder()
+                        .start(new double[] {1.25, 1.03, 1.5e6, 3e4}).model(new KneeResidual(data[0])).target(data[1])
+                        .maxIterations(1000).maxEvaluations(2000).build());
+        double[] reference = optimum.getPoint().toArray();
+        LinearRecoilKnee model = fit.model();
+        assertEquals(reference[0], model.remanence(), 1e-6 * reference[0]);
+        assertEquals(reference[1], model.recoilPermeability(), 1e-6);
+        assertEquals(reference[2], model.intrinsicCoercivity(), 1e-6 * reference[2]);
+        assertEquals(reference[3], model.kneeWidth(), 1e-4 * reference[3]);
+        assertEquals(optimum.getRMS(), fit.rmsJ(), 1e-9);
     }
 }

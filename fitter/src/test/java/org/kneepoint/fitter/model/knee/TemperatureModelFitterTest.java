@@ -23,7 +23,7 @@ class TemperatureModelFitterTest {
             double br = 1.27 * (1 - 0.0012 * (CELSIUS[i] - 20));
             double hcj = 2.0e6 * Math.exp(-0.0055 * (CELSIUS[i] - 20));
             DemagnetizationCurve curve = KneeFitterTest.sampled(h -> KneeFitterTest.multiplicativeKnee(h, br, 1.05, hcj, 0.03 * hcj),
-                    5e4, -1.1 * hcj, 400, noise, 7 + i);
+                    5e4, -1.02 * hcj, 400, noise, 7 + i);
             curves.add(curve.withTemperatureK(CELSIUS[i] + 273.15));
         }
         return curves;

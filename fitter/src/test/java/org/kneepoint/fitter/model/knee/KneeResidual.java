@@ -10,7 +10,8 @@ import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.util.Pair;
 
 /**
- * The knee model's values and analytic Jacobian at the data's H, for parameters (Br, μrec, HcJ, w):
+ * Test-only: the knee model as a Commons Math least-squares model, so that the project's own
+ * optimizer can be checked against Commons Math's Levenberg–Marquardt. Parameters (Br, μrec, HcJ, w):
  * with E = exp(−(H + HcJ)/w) and D = Br − μ0(μrec − 1)·HcJ,
  * ∂J/∂Br = 1 − E, ∂J/∂μrec = μ0·(H + HcJ·E), ∂J/∂HcJ = μ0(μrec − 1)·E + D·E/w,
  * ∂J/∂w = −D·E·(H + HcJ)/w².
