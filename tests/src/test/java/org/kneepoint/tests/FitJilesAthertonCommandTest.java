@@ -136,7 +136,7 @@ class FitJilesAthertonCommandTest {
         double[] h = FitTestData.cosineField(10);
         Path tiny = FitTestData.curveFile(folder, "tiny.csv", "# kind: loop\n", h, FitTestData.noisyFluxDensity(h, 0, 1L));
         assertBadInput(CliRun.of("fit", "ja", tiny.toString(), "--json"), "tiny.csv: the loop has 10 points; expected at least 20");
-        assertBadInput(CliRun.of("fit"), "missing model; expected one of ja, curie-weiss");
+        assertBadInput(CliRun.of("fit"), "missing model; expected one of knee, temperature, ja, curie-weiss");
         assertEquals(0, FitTestData.storedFits(db));
     }
 }
