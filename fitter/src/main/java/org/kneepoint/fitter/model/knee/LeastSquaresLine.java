@@ -7,14 +7,8 @@ final class LeastSquaresLine {
     }
 
     static double slope(double[] x, double[] y) {
-        double meanX = 0;
-        double meanY = 0;
-        for (int i = 0; i < x.length; i++) {
-            meanX += x[i];
-            meanY += y[i];
-        }
-        meanX /= x.length;
-        meanY /= x.length;
+        double meanX = mean(x);
+        double meanY = mean(y);
         double sxy = 0;
         double sxx = 0;
         for (int i = 0; i < x.length; i++) {
@@ -36,14 +30,14 @@ final class LeastSquaresLine {
     /** Coefficients {c0, c1} of y ≈ c0 + c1·(x − x0), least squares. */
     static double[] line(double[] x, double[] y, double x0) {
         double slope = slope(x, y);
-        double meanX = 0;
-        double meanY = 0;
-        for (int i = 0; i < x.length; i++) {
-            meanX += x[i];
-            meanY += y[i];
+        return new double[] {mean(y) + slope * (x0 - mean(x)), slope};
+    }
+
+    private static double mean(double[] values) {
+        double sum = 0;
+        for (double value : values) {
+            sum += value;
         }
-        meanX /= x.length;
-        meanY /= x.length;
-        return new double[] {meanY + slope * (x0 - meanX), slope};
+        return sum / values.length;
     }
 }
