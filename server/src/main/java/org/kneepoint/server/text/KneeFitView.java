@@ -53,6 +53,7 @@ public final class KneeFitView {
         json.put("points", fit.points());
         json.put("hRange", new double[] {fit.lowestH(), fit.highestH()});
         json.put("hcjExtrapolated", fit.lowestH() > -fit.model().intrinsicCoercivity() * (1 + 1e-9));
+        json.put("approximate", fit.approximate());
         return json;
     }
 
@@ -71,6 +72,10 @@ public final class KneeFitView {
         row(out, "(BH)max (model)", QuantityFormatter.format(fit.bhMax(), KILOJOULE, 4));
         row(out, "RMS residual in J", QuantityFormatter.format(fit.rmsJ(), UnitCatalog.require("mT", Dimension.FLUX_DENSITY), 3)
                 + " over " + fit.points() + " points, " + fit.iterations() + " iterations");
+        if (fit.approximate()) {
+            out.append(String.format(java.util.Locale.ROOT, "  note: the knee model follows this curve only approximately (RMS %.2g %% of Br);"
+                    + " rounded curves such as cast AlNiCo need another knee shape, not yet available%n", 100 * fit.rmsJ() / model.remanence()));
+        }
         return out.toString();
     }
 

@@ -28,6 +28,17 @@ public record KneeFit(LinearRecoilKnee model, double[] errors, double[][] correl
         correlation = java.util.Arrays.stream(correlation).map(double[]::clone).toArray(double[][]::new);
     }
 
+    /** A fit whose RMS residual exceeds this share of Br follows the curve only approximately. */
+    public static final double APPROXIMATE_RESIDUAL = 0.005;
+
+    /**
+     * True when the model follows the curve only approximately (RMS residual above 0.5 % of Br):
+     * typically rounded curves such as cast AlNiCo, whose knee the exponential shape cannot bend to.
+     */
+    public boolean approximate() {
+        return rmsJ > APPROXIMATE_RESIDUAL * model.remanence();
+    }
+
     @Override
     public double[] errors() {
         return errors.clone();

@@ -15,7 +15,7 @@ import org.kneepoint.fitter.error.NumericalFailureException;
  */
 final class KneeLeastSquares {
 
-    private static final int MAX_ITERATIONS = 200;
+    private static final int MAX_ITERATIONS = 5000;
     private static final double RELATIVE_TOLERANCE = 1e-10;
 
     private final double[] h;

@@ -1,6 +1,7 @@
 package org.kneepoint.fitter.model.knee;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.kneepoint.fitter.units.MagneticConstant.MU0;
@@ -115,5 +116,16 @@ class KneeFitterTest {
         assertEquals(reference[2], model.intrinsicCoercivity(), 1e-6 * reference[2]);
         assertEquals(reference[3], model.kneeWidth(), 1e-4 * reference[3]);
         assertEquals(optimum.getRMS(), fit.rmsJ(), 1e-9);
+    }
+
+    // A rounded AlNiCo-like curve J = Br·(1 − (−H/HcJ)^5) (invented): the exponential knee follows it
+    // only approximately, and the fit says so instead of passing it off as good.
+    @Test
+    void a_rounded_alnico_like_curve_is_fitted_and_flagged_approximate() {
+        DemagnetizationCurve curve = sampled(h -> 1.25 * (1 - Math.pow(Math.max(0, -h / 5.2e4), 5)), 0, -5.2e4, 200, 0, 1);
+        KneeFit fit = KneeFitter.fit(curve);
+        assertTrue(fit.approximate(), "rms " + fit.rmsJ());
+        assertEquals(5.2e4, fit.model().intrinsicCoercivity(), 0.05 * 5.2e4);
+        assertFalse(KneeFitter.fit(sampled(h -> multiplicativeKnee(h, 1.3, 1.05, 1.4e6, 3e4), 5e4, -1.41e6, 300, 0, 1)).approximate());
     }
 }
