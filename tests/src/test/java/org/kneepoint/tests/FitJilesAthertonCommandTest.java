@@ -9,14 +9,12 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Arrays;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.db.DatabaseLocation;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.library.FitRecord;
-import org.kneepoint.fitter.model.ja.HysteresisSimulator;
 
 class FitJilesAthertonCommandTest {
 
@@ -60,14 +58,8 @@ class FitJilesAthertonCommandTest {
 
     @Test
     void a_second_quadrant_curve_is_fitted_after_its_magnetizing_field() throws IOException {
-        double[] history = new double[61];
-        history[0] = 20_000;
-        for (int i = 1; i < history.length; i++) {
-            history[i] = 1000 - 2000.0 * (i - 1) / 59;
-        }
-        double[] b = HysteresisSimulator.adaptive(FitTestData.SOFT_IRON).simulate(history).fluxDensity();
-        Path file = FitTestData.curveFile(folder, "second.csv", "",
-                Arrays.copyOfRange(history, 1, history.length), Arrays.copyOfRange(b, 1, b.length));
+        double[][] curve = FitTestData.secondQuadrantCurve();
+        Path file = FitTestData.curveFile(folder, "second.csv", "", curve[0], curve[1]);
         assertBadInput(CliRun.of("fit", "ja", file.toString(), "--json"),
                 "second.csv: is a normal (second-quadrant) curve, not a loop; give the field it was magnetized at");
         CliRun run = CliRun.of("fit", "ja", file.toString(), "--magnetizing-field", "20kA/m", "--json");
@@ -79,6 +71,20 @@ class FitJilesAthertonCommandTest {
         CliRun table = CliRun.of("fit", "ja", file.toString(), "--magnetizing-field", "20kA/m");
         assertTrue(table.out().startsWith("second.csv: Jiles–Atherton fit to the second-quadrant curve after magnetizing"
                 + " at 20 kA/m\n"), table.out());
+    }
+
+    @Test
+    void a_stored_second_quadrant_curve_is_fitted_only_with_its_magnetizing_field() throws IOException {
+        FitTestData.storeSecondQuadrantGrade(folder, "Invented curve only");
+        assertBadInput(CliRun.of("fit", "ja", "Invented curve only", "--db", folder.toString()),
+                "grade Invented curve only: has no stored loop curve; to fit one of its second-quadrant curves give");
+        CliRun run = CliRun.of("fit", "ja", "Invented curve only", "--magnetizing-field", "20kA/m", "--save", "--json",
+                "--db", folder.toString());
+        assertEquals(0, run.exitCode(), run.err());
+        JsonNode json = MAPPER.readTree(run.out());
+        assertEquals("normal", json.get("curveKind").asText());
+        assertTrue(json.get("rmsB").asDouble() < 1e-3, "noise-free data fit closely: " + json.get("rmsB"));
+        assertEquals(1, FitTestData.storedFits(folder));
     }
 
     @Test

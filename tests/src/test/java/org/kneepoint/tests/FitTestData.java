@@ -111,6 +111,28 @@ final class FitTestData {
         }
     }
 
+    /** H and B of the soft-iron curve from +1 to −1 kA/m (60 points) measured after magnetizing at 20 kA/m. */
+    static double[][] secondQuadrantCurve() {
+        double[] history = new double[61];
+        history[0] = 20_000;
+        for (int i = 1; i < history.length; i++) {
+            history[i] = 1000 - 2000.0 * (i - 1) / 59;
+        }
+        double[] b = HysteresisSimulator.adaptive(SOFT_IRON).simulate(history).fluxDensity();
+        return new double[][] {java.util.Arrays.copyOfRange(history, 1, history.length), java.util.Arrays.copyOfRange(b, 1, b.length)};
+    }
+
+    /** A library in {@code folder} holding one grade whose only curve is that second-quadrant curve, as a normal curve at 20 °C. */
+    static void storeSecondQuadrantGrade(Path folder, String grade) {
+        double[][] curve = secondQuadrantCurve();
+        try (Library library = Library.open(DatabaseLocation.ofFolder(folder))) {
+            library.writer().importBatch(new ImportInfo("curve.csv", "0".repeat(63) + "8", Instant.parse("2026-12-02T01:00:00Z"),
+                    1, curve[0].length, 0), List.of(new GradeInfo(grade, "soft iron", null, null, null, "invented for tests")),
+                    List.of(new LibraryCurve(grade, DemagnetizationCurve.of(Quantity.B, curve[0], curve[1], 293.15), "invented", null)),
+                    List.of());
+        }
+    }
+
     static int storedFits(Path folder) {
         try (Library library = Library.open(DatabaseLocation.ofFolder(folder))) {
             return library.reader().fits().size();

@@ -63,6 +63,7 @@ public final class JilesAthertonModel {
      * e = exp(−2|x|) and D = |x|·(1 − e), L = N/D with N = (1 + e)·|x| − (1 − e),
      * L' = S/D² with S = (1 − e)² − 4e·x², and dM/dH = T/(D² − α·T) with
      * T = D·max(0, δ·(Ms·N·sign x − m·D))/k + (c·Ms/a)·S. This is algebraically the DESIGN §4 form.
+     * The exponential is {@code NegativeExponential.of}, whose chain is shorter than that of Math.exp.
      * Multiply-adds ({@link Math#fma}, one rounding each) and a plain comparison for the floor of
      * the denominator keep the chain from x to dM/dH short; the direction is folded into the two
      * products of the drive, so it costs no step of its own.
@@ -81,7 +82,7 @@ public final class JilesAthertonModel {
         if (ax < LangevinFunction.SERIES_LIMIT || ax > FUSED_LIMIT) {
             return separate(x, m, direction);
         }
-        double e = Math.exp(-2 * ax);
+        double e = NegativeExponential.of(2 * ax);
         double oneMinus = 1 - e;
         double d = ax * oneMinus;
         double numerator = Math.copySign(Math.fma(1 + e, ax, -oneMinus), x);
