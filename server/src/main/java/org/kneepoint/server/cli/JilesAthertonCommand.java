@@ -8,7 +8,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code kneepoint ja ...}: the Jiles–Atherton hysteresis model on its own (simulation). */
 @Command(name = "ja", mixinStandardHelpOptions = true,
-        description = "Jiles–Atherton hysteresis model (DESIGN §4 form).",
+        description = "Jiles–Atherton hysteresis model: simulate loops from its parameters.",
         subcommands = {JilesAthertonSimulateCommand.class})
 final class JilesAthertonCommand implements Callable<Integer> {
 
