@@ -28,7 +28,7 @@ final class GradeOptions {
 
     @Option(names = "--knee", converter = QuantityConverters.FieldStrength.class,
             description = "Knee field Hk (where J = 0.9·Br) at the reference temperature, e.g. 1450kA/m;"
-                    + " default: an assumed square knee 2 % of HcJ wide.")
+                    + " default: an assumed square knee 2 %% of HcJ wide.")
     Double knee;
 
     @Option(names = "--alpha", converter = QuantityConverters.PercentPerKelvin.class,
