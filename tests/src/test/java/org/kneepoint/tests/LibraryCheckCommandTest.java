@@ -7,14 +7,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Collectors;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.kneepoint.server.library.DemoLibrary;
 
 class LibraryCheckCommandTest {
 
@@ -103,6 +106,22 @@ class LibraryCheckCommandTest {
         JsonNode json = json("duty", "DEMO NdFeB 40/160", "--pc", "1", "--steps", "20C:0, 190C:0");
         assertTrue(json.get("extrapolated").asBoolean());
         assertEquals(4, json.get("cautions").size());
+    }
+
+    @Test
+    void a_grade_measured_only_when_hot_is_checked_from_its_lowest_measured_temperature() throws IOException {
+        // DEMO NdFeB 35/250 without its 20 °C curve: measured at 100 to 220 °C, the model reaches down to 40 °C only
+        String demo = DemoLibrary.files().get("demo-ndfeb-35-250.csv");
+        String hot = demo.lines().filter(line -> !line.startsWith("20,"))
+                .map(line -> line.replace("# grade: DEMO NdFeB 35/250", "# grade: DEMO hot-only"))
+                .collect(Collectors.joining("\n", "", "\n"));
+        Path file = folder.resolve("demo-hot-only.csv");
+        Files.writeString(file, hot);
+        assertEquals(0, CliRun.of("import", file.toString(), "--db", db).exitCode());
+        JsonNode json = json("check", "DEMO hot-only", "--pc", "1", "--temperature", "150C", "--opposing-field", "300kA/m");
+        // the demo grade's Br falls by 0.11 % of Br(20 °C) per kelvin (DemoLibrary, invented): 50 K from Br(100 °C)
+        assertEquals(-0.11 / (1 - 0.0011 * 80) * 50, json.get("reversibleLossPercent").asDouble(), 0.3);
+        assertTrue(json.get("maxWorkingTemperatureK").asDouble() > 423.15);
     }
 
     @ParameterizedTest(name = "{0}")
