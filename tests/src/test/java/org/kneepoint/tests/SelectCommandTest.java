@@ -7,9 +7,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -67,6 +69,41 @@ class SelectCommandTest {
         assertFalse(last.get("pass").asBoolean());
         assertTrue(last.get("reasons").get(0).asText().startsWith("not assessable: "), last.toString());
         assertTrue(last.get("fluxDensity").isNull());
+    }
+
+    @Test
+    void grades_with_one_temperature_or_curves_shortOfTheKneeof_the_knee_are_not_assessable_with_the_reason() throws IOException {
+        String library = folder.resolve("without-models").toString();
+        Path single = folder.resolve("single.csv");
+        Files.writeString(single, curveFile("INVENTED one temperature", new int[] {20}, 1.2));
+        Path shortOfTheKnee = folder.resolve("short.csv");
+        Files.writeString(shortOfTheKnee, curveFile("INVENTED short of the knee", new int[] {20, 100}, 0.5));
+        assertEquals(0, CliRun.of("import", single.toString(), shortOfTheKnee.toString(), "--db", library).exitCode());
+        CliRun run = CliRun.of("select", "--pc", "1", "--temperature", "80C", "--db", library, "--json");
+        assertEquals(0, run.exitCode(), run.err());
+        JsonNode rows = new ObjectMapper().readTree(run.out());
+        assertEquals(2, rows.size());
+        for (JsonNode row : rows) {
+            assertFalse(row.get("assessable").asBoolean(), row.toString());
+        }
+        assertTrue(rows.get(0).get("reasons").get(0).asText().contains("two or more temperatures"), rows.toString());
+        assertTrue(rows.get(1).get("reasons").get(0).asText().contains("stops before its knee"), rows.toString());
+    }
+
+    /** An invented NdFeB-like curve file, J of the knee form of DemoLibrary, from H = 0 down to {@code reach}·HcJ. */
+    private static String curveFile(String grade, int[] celsius, double reach) {
+        StringBuilder out = new StringBuilder("# INVENTED DATA for a test\n# grade: " + grade
+                + "\n# family: sintered NdFeB\nT [°C],H [kA/m],J [T]\n");
+        for (int t : celsius) {
+            double br = 1.3 * (1 - 0.0012 * (t - 20));
+            double hcj = 1600 * Math.exp(-0.006 * (t - 20));
+            for (int i = 0; i < 60; i++) {
+                double h = -reach * hcj * i / 59;
+                double j = (br + 4e-7 * Math.PI * 0.05 * h * 1e3) * (1 - Math.exp(-(h + hcj) / (0.03 * hcj)));
+                out.append(String.format(Locale.ROOT, "%d,%.4f,%.5f%n", t, h, Math.max(0.0, j)));
+            }
+        }
+        return out.toString();
     }
 
     @ParameterizedTest(name = "{0}")
