@@ -145,6 +145,16 @@ class LibraryCheckCommandTest {
     }
 
     @Test
+    void a_grade_the_knee_model_cannot_fit_fails_numerically_naming_the_grade() {
+        // the demo AlNiCo curves are rounded, with no straight recoil line before one knee
+        CliRun run = CliRun.of("check", "DEMO AlNiCo 5", "--pc", "5", "--temperature", "20C", "--db", db);
+        assertEquals(3, run.exitCode(), run.err());
+        assertEquals("", run.out());
+        assertEquals(1, run.err().strip().lines().count(), run.err());
+        assertTrue(run.err().contains("grade 'DEMO AlNiCo 5': no temperature model"), run.err());
+    }
+
+    @Test
     void neither_grade_nor_typed_in_values_gives_exit_2() {
         CliRun run = CliRun.of("check", "--pc", "1", "--temperature", "20C", "--db", db);
         assertEquals(2, run.exitCode(), run.err());
