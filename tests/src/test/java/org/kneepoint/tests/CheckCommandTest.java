@@ -1,6 +1,7 @@
 package org.kneepoint.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -34,10 +35,11 @@ class CheckCommandTest {
     void json_has_exactly_the_documented_keys() throws IOException {
         JsonNode json = json(with("check", "--pc", "1.5", "--temperature", "80C", "--opposing-field", "100kA/m", "--json"));
         List<String> keys = List.of("pc", "operatingPoint", "reversibleLossPercent", "irreversibleLossPercent", "kneeMarginH",
-                "maxWorkingTemperatureK", "cautions");
+                "maxWorkingTemperatureK", "extrapolated", "cautions");
         assertEquals(keys, iterable(json));
         assertEquals(List.of("h", "b", "j"), iterable(json.get("operatingPoint")));
         assertEquals(3, json.get("cautions").size());
+        assertFalse(json.get("extrapolated").asBoolean());
         // Br(T)/Br(T0) − 1 = α·ΔT = −0.12 %/K · 60 K (the linear law, REFERENCES §6b)
         assertEquals(-7.2, json.get("reversibleLossPercent").asDouble(), 1e-9);
         assertTrue(json.get("maxWorkingTemperatureK").asDouble() > 353.15);

@@ -23,7 +23,7 @@ public enum RankingOrder {
     }
 
     /** Passing grades first, then this order, then by name. */
-    Comparator<RankedGrade> comparator() {
+    public Comparator<RankedGrade> comparator() {
         return Comparator.comparing((RankedGrade grade) -> !grade.passes()).thenComparing(order)
                 .thenComparing(RankedGrade::name);
     }

@@ -3,7 +3,6 @@ package org.kneepoint.server.cli;
 import java.util.concurrent.Callable;
 import org.kneepoint.fitter.loadline.DesignCheck;
 import org.kneepoint.fitter.loadline.DesignCheckResult;
-import org.kneepoint.fitter.loadline.LinearTemperatureLaw;
 import org.kneepoint.fitter.loadline.LoadLine;
 import org.kneepoint.fitter.loadline.LocalKneeCheck;
 import org.kneepoint.fitter.loadline.LocalKneeResult;
@@ -13,12 +12,13 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code kneepoint check (--pc P | SHAPE) --br ... --temperature T}: a typed-in grade on its load line
- * at a temperature — operating point, margin to the knee, reversible and irreversible loss, maximum
- * working temperature (DESIGN §2, workflow 3).
+ * {@code kneepoint check [GRADE] (--pc P | SHAPE) [--br ...] --temperature T}: a grade of the library, or one
+ * typed in, on its load line at a temperature — operating point, margin to the knee, reversible and irreversible
+ * loss, maximum working temperature (DESIGN §2, workflow 3).
  */
 @Command(name = "check", mixinStandardHelpOptions = true,
         description = "Operating point, knee margin, flux loss and maximum working temperature of a magnet on its load line.")
@@ -30,8 +30,15 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     private LoadLineOptions loadLine;
 
+    @Parameters(arity = "0..1", paramLabel = "GRADE",
+            description = "A grade of the library (its temperature model); without it, type the grade in with --br, --mu-rec, --hcj.")
+    private String gradeName;
+
     @Mixin
     private GradeOptions grade;
+
+    @Mixin
+    private LibraryOption libraryOption;
 
     @Option(names = "--temperature", required = true, converter = QuantityConverters.Temperature.class,
             description = "Temperature of the magnet, e.g. 120C.")
@@ -51,16 +58,18 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LoadLine line = new LoadLine(loadLine.pc(), opposingField);
-        LinearTemperatureLaw law = grade.law();
-        DesignCheckResult result = DesignCheck.of(law, line, temperature, lossLimitPercent / 100.0);
+        GradeModel model = GradeModel.of(gradeName, grade, libraryOption);
+        DesignCheckResult result = DesignCheck.of(model.model(), line, temperature, lossLimitPercent / 100.0);
+        boolean extrapolated = model.extrapolated(result);
         var out = spec.commandLine().getOut();
         if (json) {
-            out.print(Json.write(CheckView.json(result)) + System.lineSeparator());
+            out.print(Json.write(CheckView.json(result, extrapolated)) + System.lineSeparator());
         } else {
             LocalKneeResult local = loadLine.shape()
-                    .map(shape -> LocalKneeCheck.of(shape, law.at(temperature), line, LocalKneeCheck.DEFAULT_RESOLUTION))
+                    .map(shape -> LocalKneeCheck.of(shape, model.model().at(temperature), line, LocalKneeCheck.DEFAULT_RESOLUTION))
                     .orElse(null);
-            out.print(CheckView.table(loadLine.describe(), result, lossLimitPercent / 100.0, local));
+            out.print(CheckView.table(model.description(), loadLine.describe(), result, lossLimitPercent / 100.0, local,
+                    extrapolated));
         }
         out.flush();
         return 0;

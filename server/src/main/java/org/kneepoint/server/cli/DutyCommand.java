@@ -10,11 +10,13 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code kneepoint duty (--pc P | SHAPE) --br ... --steps "20C:0, 150C:300kA/m, 20C:0"}: flux and loss
- * after each (temperature, opposing field) step; the worst point so far sets the recoil line.
+ * {@code kneepoint duty [GRADE] (--pc P | SHAPE) [--br ...] --steps "20C:0, 150C:300kA/m, 20C:0"}: flux and loss
+ * after each (temperature, opposing field) step of a grade of the library or one typed in; the worst point so
+ * far sets the recoil line.
  */
 @Command(name = "duty", mixinStandardHelpOptions = true,
         description = "Flux and irreversible loss after each step of a duty sequence of temperatures and opposing fields.")
@@ -26,8 +28,15 @@ final class DutyCommand implements Callable<Integer> {
     @Mixin
     private LoadLineOptions loadLine;
 
+    @Parameters(arity = "0..1", paramLabel = "GRADE",
+            description = "A grade of the library (its temperature model); without it, type the grade in with --br, --mu-rec, --hcj.")
+    private String gradeName;
+
     @Mixin
     private GradeOptions grade;
+
+    @Mixin
+    private LibraryOption libraryOption;
 
     @Option(names = "--steps", required = true, converter = DutyStepsConverter.class,
             description = "Steps TEMPERATURE:OPPOSING_FIELD separated by commas, e.g. \"20C:0, 150C:300kA/m, 20C:0\".")
@@ -39,10 +48,12 @@ final class DutyCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         double pc = loadLine.pc();
-        List<DutyStepResult> results = DutySequence.run(grade.law(), pc, steps.list());
+        GradeModel model = GradeModel.of(gradeName, grade, libraryOption);
+        List<DutyStepResult> results = DutySequence.run(model.model(), pc, steps.list());
+        boolean extrapolated = steps.list().stream().anyMatch(step -> model.extrapolated().test(step.temperature()));
         var out = spec.commandLine().getOut();
-        out.print(json ? Json.write(DutyView.json(pc, results)) + System.lineSeparator()
-                : DutyView.table(loadLine.describe(), pc, results));
+        out.print(json ? Json.write(DutyView.json(pc, results, extrapolated)) + System.lineSeparator()
+                : DutyView.table(model.description(), loadLine.describe(), pc, results, extrapolated));
         out.flush();
         return 0;
     }

@@ -7,6 +7,7 @@ import org.kneepoint.fitter.curve.CurveKind;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.NotFoundException;
+import org.kneepoint.fitter.error.NumericalFailureException;
 import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.fitter.model.knee.ModeledCurves;
 import org.kneepoint.fitter.model.knee.TemperatureFit;
@@ -55,6 +56,8 @@ public final class GradeCurves {
             return TemperatureModelFitter.fit(usable);
         } catch (BadInputException e) {
             throw new BadInputException("grade '" + grade + "': no temperature model (" + e.getMessage() + ")");
+        } catch (NumericalFailureException e) {
+            throw new NumericalFailureException("grade '" + grade + "': no temperature model (" + e.getMessage() + ")");
         }
     }
 }

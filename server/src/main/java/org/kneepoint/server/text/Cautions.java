@@ -1,5 +1,6 @@
 package org.kneepoint.server.text;
 
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -14,13 +15,28 @@ public final class Cautions {
             "Follow local codes and licensed engineering practice for any safety decision.",
             "Strong magnets pinch and shatter, and they disturb implanted medical devices.");
 
+    /** Added when a result rests on the temperature model outside the measured temperatures. */
+    public static final String EXTRAPOLATED = "The temperature model was extrapolated beyond the measured temperatures:"
+            + " these values are less certain than the rest.";
+
     private Cautions() {
     }
 
-    /** The cautions as a table section. */
-    public static String table() {
+    /** The cautions, with {@link #EXTRAPOLATED} first when the result was extrapolated. */
+    public static List<String> of(boolean extrapolated) {
+        if (!extrapolated) {
+            return SAFETY;
+        }
+        List<String> all = new ArrayList<>(SAFETY.size() + 1);
+        all.add(EXTRAPOLATED);
+        all.addAll(SAFETY);
+        return List.copyOf(all);
+    }
+
+    /** The cautions as a table section, with {@link #EXTRAPOLATED} when the result was extrapolated. */
+    public static String table(boolean extrapolated) {
         StringBuilder out = new StringBuilder("Cautions:\n");
-        SAFETY.forEach(caution -> out.append("  - ").append(caution).append('\n'));
+        of(extrapolated).forEach(caution -> out.append("  - ").append(caution).append('\n'));
         return out.toString();
     }
 }

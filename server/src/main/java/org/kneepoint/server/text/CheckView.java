@@ -8,8 +8,9 @@ import org.kneepoint.fitter.loadline.OperatingPoint;
 
 /**
  * A design check as JSON ({@code pc, operatingPoint {h, b, j}, reversibleLossPercent,
- * irreversibleLossPercent, kneeMarginH, maxWorkingTemperatureK, cautions}, SI) and as a table.
- * {@code reversibleLossPercent} is 100·(Br(T)/Br(T0) − 1), negative when the flux falls.
+ * irreversibleLossPercent, kneeMarginH, maxWorkingTemperatureK, extrapolated, cautions}, SI) and as a table.
+ * {@code reversibleLossPercent} is 100·(Br(T)/Br(T0) − 1), negative when the flux falls; {@code extrapolated}
+ * says whether the grade's temperature model was used outside its measured temperatures.
  */
 public final class CheckView {
 
@@ -17,7 +18,7 @@ public final class CheckView {
     }
 
     /** The JSON object of one check. */
-    public static Map<String, Object> json(DesignCheckResult result) {
+    public static Map<String, Object> json(DesignCheckResult result, boolean extrapolated) {
         Map<String, Object> json = new LinkedHashMap<>();
         json.put("pc", result.loadLine().pc());
         json.put("operatingPoint", point(result.point()));
@@ -25,7 +26,8 @@ public final class CheckView {
         json.put("irreversibleLossPercent", 100.0 * result.irreversibleLoss());
         json.put("kneeMarginH", result.kneeMarginField());
         json.put("maxWorkingTemperatureK", result.maxWorkingTemperature());
-        json.put("cautions", Cautions.SAFETY);
+        json.put("extrapolated", extrapolated);
+        json.put("cautions", Cautions.of(extrapolated));
         return json;
     }
 
@@ -38,15 +40,21 @@ public final class CheckView {
     }
 
     /**
-     * A readable table of one check; {@code lossLimit} is the fraction the maximum temperature was found for,
-     * {@code local} the local check of the shape, or null when the load line was given by its Pc.
+     * A readable table of one check; {@code model} says where the grade's model comes from, {@code lossLimit} is
+     * the fraction the maximum temperature was found for, {@code local} the local check of the shape, or null
+     * when the load line was given by its Pc.
      */
-    public static String table(String loadLine, DesignCheckResult result, double lossLimit, LocalKneeResult local) {
+    public static String table(String model, String loadLine, DesignCheckResult result, double lossLimit, LocalKneeResult local,
+            boolean extrapolated) {
         OperatingPoint point = result.point();
         StringBuilder out = new StringBuilder();
         out.append("Design check at ").append(EngineeringUnits.celsius(result.temperature())).append(", ").append(loadLine)
                 .append(", Pc = ").append(EngineeringUnits.number(result.loadLine().pc())).append(", opposing field ")
                 .append(EngineeringUnits.field(result.loadLine().opposingField())).append('\n');
+        row(out, "grade", model);
+        if (extrapolated) {
+            row(out, "extrapolated", "yes: T, T0 or the maximum working temperature lies outside the measured temperatures");
+        }
         row(out, "operating point", "H = " + EngineeringUnits.field(point.h()) + ", B = " + EngineeringUnits.tesla(point.b())
                 + ", J = " + EngineeringUnits.tesla(point.j()) + ", -B·H = " + EngineeringUnits.energy(point.energyProduct()));
         row(out, "knee (J = 0.9 Br)", "H = " + EngineeringUnits.field(result.kneeField()));
@@ -62,7 +70,7 @@ public final class CheckView {
                     + ", y = " + EngineeringUnits.millimetres(local.worstY()) + ", z = " + EngineeringUnits.millimetres(local.worstZ())
                     + " (" + local.worstRegion().name().toLowerCase().replace('_', ' ') + ")");
         }
-        return out.append(Cautions.table()).toString();
+        return out.append(Cautions.table(extrapolated)).toString();
     }
 
     private static String kelvin(Double margin) {

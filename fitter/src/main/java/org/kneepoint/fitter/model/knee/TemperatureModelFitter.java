@@ -9,6 +9,9 @@ import org.kneepoint.fitter.error.BadInputException;
 /**
  * Builds a grade's temperature model: one knee fit per curve, then {@link FittedTemperatureModel}
  * and the coefficients of {@link TemperatureFit}. Needs curves at two or more distinct temperatures.
+ * T0 is 20 °C when the model reaches it; when the data lie too far above or below it, they say otherwise
+ * (DESIGN §4) and T0 is the measured temperature nearest to 20 °C, so that every check's reference and
+ * its search for a maximum working temperature stay inside the model's range.
  */
 public final class TemperatureModelFitter {
 
@@ -40,9 +43,13 @@ public final class TemperatureModelFitter {
         if (fits.size() < 2) {
             throw new BadInputException("a temperature model needs curves at two or more temperatures, got " + fits.size());
         }
+        double[] t = fits.stream().mapToDouble(KneeFit::temperatureK).toArray();
         double t0 = DEFAULT_REFERENCE_K;
         FittedTemperatureModel model = new FittedTemperatureModel(fits, t0);
-        double[] t = fits.stream().mapToDouble(KneeFit::temperatureK).toArray();
+        if (t0 < model.lowestTemperature() || t0 > model.highestTemperature()) {
+            t0 = t0 < model.lowestTemperature() ? t[0] : t[t.length - 1];
+            model = new FittedTemperatureModel(fits, t0);
+        }
         double[] br = fits.stream().mapToDouble(fit -> fit.model().remanence()).toArray();
         double[] hcj = fits.stream().mapToDouble(fit -> fit.model().intrinsicCoercivity()).toArray();
         double[] muRec = fits.stream().mapToDouble(fit -> fit.model().recoilPermeability()).toArray();

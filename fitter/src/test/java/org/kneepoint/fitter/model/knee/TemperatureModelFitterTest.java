@@ -70,6 +70,18 @@ class TemperatureModelFitterTest {
     }
 
     @Test
+    void reference_temperature_is_20C_when_the_model_reaches_it_else_the_nearest_measured_one() {
+        assertEquals(293.15, TemperatureModelFitter.fit(curves(0)).referenceTemperatureK(), 0.0);
+        // measured at 100 to 180 °C: the model reaches down to 50 °C only (half the span, at least 50 K)
+        List<DemagnetizationCurve> hot = curves(0).subList(2, CELSIUS.length);
+        TemperatureFit fit = TemperatureModelFitter.fit(hot);
+        assertEquals(373.15, fit.referenceTemperatureK(), 1e-9);
+        assertEquals(373.15, fit.model().referenceTemperature(), 1e-9);
+        assertEquals(1.0, fit.model().remanenceRatio(373.15), 1e-12);
+        assertEquals(-0.0012 / (1 - 0.0012 * 80), fit.alpha(), 0.02 * 0.0012);
+    }
+
+    @Test
     void temperatures_beyond_the_measured_range_are_flagged_and_bounded() {
         TemperatureFit fit = TemperatureModelFitter.fit(curves(0));
         assertTrue(fit.model().isExtrapolated(473.15 + 20));
