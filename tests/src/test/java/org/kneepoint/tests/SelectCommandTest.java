@@ -60,19 +60,23 @@ class SelectCommandTest {
     }
 
     @Test
-    void a_grade_without_a_temperature_model_is_listed_as_not_assessable_last() throws IOException {
-        // The demo AlNiCo curves are rounded, with no recoil line and one knee, so the knee model does not fit them.
+    void rounded_alnico_grades_fail_on_a_short_magnets_load_line() throws IOException {
+        // AlNiCo's low coercivity needs a long magnet (a high Pc); at Pc = 1 it loses much of its flux (common practice).
         JsonNode rows = select("--pc", "1", "--temperature", "100C");
-        JsonNode last = rows.get(rows.size() - 1);
-        assertEquals("cast AlNiCo", last.get("family").asText());
-        assertFalse(last.get("assessable").asBoolean());
-        assertFalse(last.get("pass").asBoolean());
-        assertTrue(last.get("reasons").get(0).asText().startsWith("not assessable: "), last.toString());
-        assertTrue(last.get("fluxDensity").isNull());
+        int alnico = 0;
+        for (JsonNode row : rows) {
+            if (row.get("family").asText().equals("cast AlNiCo")) {
+                alnico++;
+                assertTrue(row.get("assessable").asBoolean(), row.toString());
+                assertFalse(row.get("pass").asBoolean(), row.toString());
+                assertTrue(row.get("reasons").get(0).asText().startsWith("irreversible loss"), row.toString());
+            }
+        }
+        assertEquals(2, alnico);
     }
 
     @Test
-    void grades_with_one_temperature_or_curves_shortOfTheKneeof_the_knee_are_not_assessable_with_the_reason() throws IOException {
+    void grades_with_one_temperature_or_curves_short_of_the_knee_are_not_assessable_with_the_reason() throws IOException {
         String library = folder.resolve("without-models").toString();
         Path single = folder.resolve("single.csv");
         Files.writeString(single, curveFile("INVENTED one temperature", new int[] {20}, 1.2));
@@ -176,7 +180,6 @@ class SelectCommandTest {
         CliRun run = CliRun.of("select", "--diameter", "10mm", "--length", "5mm", "--temperature", "120C", "--db", db);
         assertEquals(0, run.exitCode(), run.err());
         DemoLibrary.gradeNames().forEach(name -> assertTrue(run.out().contains(name), name));
-        assertTrue(run.out().contains("not assessable"), run.out());
         assertTrue(run.out().contains("confirm them by measurement"), run.out());
         assertTrue(run.out().endsWith("they disturb implanted medical devices.\n"), run.out());
     }
