@@ -10,7 +10,7 @@ import picocli.CommandLine.Command;
         description = "Demagnetization curves, fits and design checks for permanent magnets.",
         subcommands = {CurveCommand.class, ImportCommand.class, GradesCommand.class, ExportCommand.class,
             BackupCommand.class, RestoreCommand.class, DemoCommand.class, FitCommand.class, JilesAthertonCommand.class,
-            PermeanceCommand.class, FieldCommand.class, CheckCommand.class, DutyCommand.class,
+            PermeanceCommand.class, FieldCommand.class, CheckCommand.class, DutyCommand.class, ServeCommand.class,
             CommandLine.HelpCommand.class})
 public final class KneepointCommand implements Runnable {
 
