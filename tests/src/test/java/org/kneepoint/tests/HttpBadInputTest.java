@@ -5,10 +5,17 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.io.InputStream;
+import java.io.SequenceInputStream;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.AfterEach;
@@ -18,6 +25,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.kneepoint.server.http.ServerSettings;
 
 class HttpBadInputTest {
 
@@ -115,6 +123,44 @@ class HttpBadInputTest {
         String broken = "# grade: Invented Broken\n# family: sintered NdFeB\n# temperature: 20 C\nH [kA/m],J [T]\n0,1.2\n-900,abc\n";
         JsonNode error = error(server.upload("/api/import", Map.of("good.csv", good, "broken.csv", broken), Map.of()), 400, "BAD_INPUT");
         assertTrue(error.get("message").asText().contains("broken.csv"), error.toString());
+    }
+
+    @Test
+    void an_oversize_streamed_upload_is_refused_as_too_large() throws Exception {
+        String boundary = "kneepoint-oversize";
+        byte[] head = ("--" + boundary + "\r\nContent-Disposition: form-data; name=\"file\"; filename=\"big.csv\"\r\n\r\n")
+                .getBytes(StandardCharsets.UTF_8);
+        byte[] tail = ("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8);
+        long zeros = ServerSettings.MAX_UPLOAD_BYTES + 1024;
+        HttpResponse<String> response = server.post("/api/import", HttpRequest.BodyPublishers.ofInputStream(() -> new SequenceInputStream(
+                Collections.enumeration(List.of(new ByteArrayInputStream(head), new ZeroStream(zeros), new ByteArrayInputStream(tail))))),
+                "multipart/form-data; boundary=" + boundary);
+        error(response, 413, "TOO_LARGE");
+    }
+
+    /** {@code length} zero bytes, without holding them in memory. */
+    private static final class ZeroStream extends InputStream {
+        private long left;
+
+        ZeroStream(long length) {
+            left = length;
+        }
+
+        @Override
+        public int read() {
+            return left-- > 0 ? 0 : -1;
+        }
+
+        @Override
+        public int read(byte[] buffer, int offset, int length) {
+            if (left <= 0) {
+                return -1;
+            }
+            int count = (int) Math.min(length, left);
+            Arrays.fill(buffer, offset, offset + count, (byte) 0);
+            left -= count;
+            return count;
+        }
     }
 
     @Test

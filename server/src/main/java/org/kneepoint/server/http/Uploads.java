@@ -31,7 +31,7 @@ public final class Uploads implements AutoCloseable {
     }
 
     public static Uploads of(Context context) {
-        List<UploadedFile> uploaded = context.uploadedFiles();
+        List<UploadedFile> uploaded = parts(context);
         if (uploaded.isEmpty()) {
             throw new BadInputException("no file in the upload; send multipart/form-data with one or more parts named 'file'");
         }
@@ -58,6 +58,23 @@ public final class Uploads implements AutoCloseable {
             throw (RuntimeException) e;
         }
         return new Uploads(folder, files);
+    }
+
+    /**
+     * The file parts of the request. A body that outgrows the upload limit while it streams (no
+     * Content-Length to check in advance) is refused as too large; a body that is not multipart is bad input.
+     */
+    private static List<UploadedFile> parts(Context context) {
+        try {
+            return context.uploadedFiles();
+        } catch (Exception e) {
+            for (Throwable cause = e; cause != null; cause = cause.getCause()) {
+                if (cause.getMessage() != null && cause.getMessage().contains("max length exceeded")) {
+                    throw new RequestRefused(413, "TOO_LARGE", "the upload is larger than " + ServerSettings.MAX_UPLOAD_BYTES + " bytes");
+                }
+            }
+            throw new BadInputException("the upload is not readable multipart/form-data (" + e.getClass().getSimpleName() + ")");
+        }
     }
 
     public List<Path> files() {
