@@ -25,7 +25,8 @@ import org.kneepoint.server.text.Temperatures;
 /**
  * The demagnetization chart of a grade: B(H) solid and J(H) dashed at every stored temperature,
  * one colour per temperature, a ring on each J curve at its knee (H = −Hk, J = 0.9·Br). H in kA/m
- * on the horizontal axis, B and J in tesla on the vertical one. Drawn as SVG.
+ * on the horizontal axis, B and J in tesla on the vertical one, from just below 0 (where B crosses
+ * zero at −HcB) to the highest value. Drawn as SVG.
  */
 public final class GradeChart {
 
@@ -68,7 +69,8 @@ public final class GradeChart {
         NumberAxis field = new NumberAxis("field strength H (kA/m)");
         NumberAxis flux = new NumberAxis("flux density B, polarization J (T)");
         field.setAutoRangeIncludesZero(true);
-        flux.setAutoRangeIncludesZero(true);
+        double top = top(usable);
+        flux.setRange(-0.05 * top, 1.08 * top);
         XYPlot plot = new XYPlot(data, field, flux, renderer);
         ChartStyle.apply(plot);
         JFreeChart chart = new JFreeChart(grade, ChartStyle.TITLE_FONT, plot, true);
@@ -78,6 +80,20 @@ public final class GradeChart {
         SVGGraphics2D graphics = new SVGGraphics2D(width, height);
         chart.draw(graphics, new Rectangle(0, 0, width, height));
         return graphics.getSVGDocument();
+    }
+
+    /** The highest B or J of the curves: the flux axis shows the second quadrant up to it (B below 0 is left out). */
+    private static double top(List<DemagnetizationCurve> curves) {
+        double top = 0.1;
+        for (DemagnetizationCurve curve : curves) {
+            for (double value : curve.b()) {
+                top = Math.max(top, value);
+            }
+            for (double value : curve.j()) {
+                top = Math.max(top, value);
+            }
+        }
+        return top;
     }
 
     private static XYSeries series(String key, double[] h, double[] values) {
