@@ -100,4 +100,11 @@ class HttpWriteTokenTest {
         assertTrue(run.err().contains("token"), run.err());
         assertEquals("", run.out());
     }
+
+    @Test
+    void serve_on_a_port_in_use_is_bad_input_with_a_clear_message() {
+        CliRun run = CliRun.of("serve", "--port", String.valueOf(server.application.port()), "--db", folder.resolve("second").toString());
+        assertEquals(2, run.exitCode());
+        assertTrue(run.err().contains("cannot listen on 127.0.0.1 port " + server.application.port()), run.err());
+    }
 }

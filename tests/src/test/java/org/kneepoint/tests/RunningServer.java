@@ -46,8 +46,12 @@ final class RunningServer implements AutoCloseable {
         return URI.create("http://127.0.0.1:" + application.port() + pathAndQuery);
     }
 
-    HttpResponse<String> get(String pathAndQuery) throws IOException, InterruptedException {
-        return client.send(HttpRequest.newBuilder(uri(pathAndQuery)).GET().build(), HttpResponse.BodyHandlers.ofString());
+    HttpResponse<String> get(String pathAndQuery, String... headers) throws IOException, InterruptedException {
+        HttpRequest.Builder request = HttpRequest.newBuilder(uri(pathAndQuery)).GET();
+        if (headers.length > 0) {
+            request.headers(headers);
+        }
+        return client.send(request.build(), HttpResponse.BodyHandlers.ofString());
     }
 
     /** A multipart/form-data POST of files (name → content) and form fields, with extra headers. */

@@ -138,4 +138,13 @@ class WebPagesTest {
         assertEquals(400, stale.statusCode());
         assertEquals(before, server.rowCounts());
     }
+
+    @Test
+    void a_browser_asking_for_an_unknown_grade_gets_a_not_found_page_with_the_name_escaped() throws Exception {
+        HttpResponse<String> response = server.get("/grades/%3Cb%3ENone%3C%2Fb%3E", "Accept", "text/html,application/xhtml+xml");
+        assertEquals(404, response.statusCode());
+        assertTrue(response.headers().firstValue("Content-Type").orElse("").startsWith("text/html"));
+        assertTrue(response.body().contains("&lt;b&gt;None&lt;/b&gt;"));
+        assertFalse(response.body().contains("<b>None"));
+    }
 }

@@ -20,12 +20,12 @@ public final class HttpApi {
     private HttpApi() {
     }
 
-    /** Installs the guards, the error mapper and the API routes into a Javalin configuration. */
-    public static void install(JavalinConfig config, Library library, ServerSettings settings) {
+    /** Installs the guards, the error mapper (with the page it shows browsers) and the API routes into a Javalin configuration. */
+    public static void install(JavalinConfig config, Library library, ServerSettings settings, ErrorPage errorPage) {
         config.http.maxRequestSize = ServerSettings.MAX_OTHER_BYTES;
         config.jetty.multipartConfig.maxTotalRequestSize(ServerSettings.MAX_UPLOAD_BYTES, SizeUnit.BYTES);
         config.jetty.multipartConfig.maxFileSize(ServerSettings.MAX_UPLOAD_BYTES, SizeUnit.BYTES);
-        ErrorMapper.install(config);
+        ErrorMapper.install(config, errorPage);
         WriteGuard guard = new WriteGuard(settings.token());
         config.routes.before(context -> {
             checkSize(context);

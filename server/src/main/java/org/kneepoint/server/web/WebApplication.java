@@ -1,10 +1,12 @@
 package org.kneepoint.server.web;
 
 import io.javalin.Javalin;
+import io.javalin.util.JavalinBindException;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import org.kneepoint.db.Library;
+import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.server.http.HttpApi;
 import org.kneepoint.server.http.ServerSettings;
 
@@ -25,6 +27,7 @@ public final class WebApplication implements AutoCloseable {
         this.routes = routes;
     }
 
+    /** Starts listening; an address or port that cannot be used is bad input. */
     public static WebApplication start(Library library, ServerSettings settings) {
         ImportStaging staging = new ImportStaging();
         List<String> routes = Collections.synchronizedList(new ArrayList<>());
@@ -33,10 +36,16 @@ public final class WebApplication implements AutoCloseable {
             config.startup.showJavalinBanner = false;
             config.startup.showOldJavalinVersionWarning = false;
             config.events.handlerAdded(info -> routes.add(info.getHttpMethod().name() + " " + info.getPath()));
-            HttpApi.install(config, library, settings);
+            HttpApi.install(config, library, settings, pages::error);
             pages.install(config);
         });
-        server.start(settings.bind(), settings.port());
+        try {
+            server.start(settings.bind(), settings.port());
+        } catch (JavalinBindException e) {
+            staging.close();
+            throw new BadInputException("cannot listen on " + settings.bind() + " port " + settings.port()
+                    + " (in use, or not an address of this machine); choose another --port, or --port 0 for any free one");
+        }
         return new WebApplication(server, staging, routes);
     }
 

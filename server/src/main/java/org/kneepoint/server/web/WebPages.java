@@ -83,6 +83,13 @@ final class WebPages {
         }
     }
 
+    /** The page shown to a browser for a failed request. */
+    String error(int status, String message) {
+        String content = "<h1>" + (status == 404 ? "Not found" : "The request could not be served") + "</h1>"
+                + "<div class=\"problem\" role=\"alert\">" + Html.text(message) + "</div><p><a href=\"/\">Back to the library</a></p>";
+        return Layout.page(status == 404 ? "Not found" : "Error", "", content, false);
+    }
+
     private boolean demoPresent() {
         return library.reader().grades(null).stream().anyMatch(grade -> Layout.isDemo(grade.name()));
     }
