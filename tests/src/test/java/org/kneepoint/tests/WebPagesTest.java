@@ -56,6 +56,11 @@ class WebPagesTest {
         assertTrue(html.contains("href=\"/grades/DEMO%20NdFeB%2042%2F100\""));
         assertTrue(html.contains("20 °C, 60 °C, 80 °C, 100 °C"));
         assertTrue(html.contains("invented demonstration data"));
+        assertTrue(html.contains("href=\"/style.css\""));
+        HttpResponse<String> style = server.get("/style.css");
+        assertEquals(200, style.statusCode());
+        assertTrue(style.headers().firstValue("Content-Type").orElse("").startsWith("text/css"));
+        assertTrue(style.body().contains(".caution"));
     }
 
     @Test
