@@ -1,22 +1,12 @@
 package org.kneepoint.server.cli;
 
 import java.nio.file.Path;
-import java.util.Comparator;
-import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.curve.CurveKind;
-import org.kneepoint.fitter.curve.CurveTable;
-import org.kneepoint.fitter.curve.CurveTables;
 import org.kneepoint.fitter.curve.Quantity;
-import org.kneepoint.fitter.library.GradeInfo;
-import org.kneepoint.server.library.GradeCurve;
-import org.kneepoint.server.library.GradeCurves;
-import org.kneepoint.importer.export.CurveExportWriter;
-import org.kneepoint.importer.export.ExportHeader;
 import org.kneepoint.importer.export.ExportUnits;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.library.CurveExport;
+import org.kneepoint.server.library.GradeCurves;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -75,28 +65,15 @@ final class ExportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        GradeCurve stored;
-        GradeInfo info;
+        String text;
         try (Library library = libraryOption.open()) {
-            List<GradeCurve> curves = GradeCurves.at(library.reader(), grade, temperatureK);
-            stored = curves.stream().min(Comparator.comparing(c -> c.curve().kind() == CurveKind.LOOP)).orElseThrow();
-            info = library.reader().grade(grade).orElseThrow();
+            GradeCurves.stored(library.reader(), grade);
+            CurveExport export = new CurveExport(grade, temperatureK,
+                    format == Format.json ? CurveExport.Format.JSON : CurveExport.Format.CSV,
+                    curve == CurveChoice.normal ? Quantity.B : Quantity.J, points,
+                    units == UnitChoice.si ? ExportUnits.SI : ExportUnits.CGS, shifted, bare);
+            text = export.write(library.reader(), VersionInfo.version());
         }
-        if (bare && format == Format.json) {
-            throw new org.kneepoint.fitter.error.BadInputException("--bare writes CSV numbers only; leave out --format json");
-        }
-        Quantity quantity = curve == CurveChoice.normal ? Quantity.B : Quantity.J;
-        CurveTable table = CurveTables.of(stored.curve(), quantity, points, shifted);
-        ExportUnits exportUnits = units == UnitChoice.si ? ExportUnits.SI : ExportUnits.CGS;
-        String notes = String.format(Locale.ROOT, "exported by kneepoint %s from the %s %s curve at %s%s: %s",
-                VersionInfo.version(), stored.modeled() ? "modeled" : "stored", stored.curve().kind().name().toLowerCase(Locale.ROOT),
-                Temperatures.celsius(stored.curve().temperatureK()),
-                stored.extrapolated() ? " (EXTRAPOLATED beyond the measured temperatures)" : "", table.description());
-        ExportHeader header = new ExportHeader(info.name(), info.family(), stored.curve().temperatureK(),
-                quantity == Quantity.B ? "normal" : "intrinsic", stored.source(), notes);
-        String text = bare ? CurveExportWriter.bare(table, exportUnits)
-                : format == Format.json ? CurveExportWriter.json(header, table, exportUnits)
-                : CurveExportWriter.csv(header, table, exportUnits);
         if (output == null) {
             spec.commandLine().getOut().print(text);
             spec.commandLine().getOut().flush();

@@ -1,13 +1,12 @@
 package org.kneepoint.server.cli;
 
 import java.nio.file.Path;
-import java.time.Instant;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.library.ImportPlan;
-import org.kneepoint.server.library.ImportPlanner;
+import org.kneepoint.server.library.ImportRun;
 import org.kneepoint.server.text.ImportView;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
@@ -44,12 +43,7 @@ final class ImportCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         try (Library library = libraryOption.open()) {
-            List<ImportPlan> plans = new ImportPlanner(SizeLimit.of(maxFileSize), library.reader()).plan(files, Instant.now());
-            List<org.kneepoint.fitter.library.ImportBatch> batches = plans.stream()
-                    .filter(plan -> !plan.alreadyImported()).map(ImportPlan::batch).toList();
-            if (!dryRun && !batches.isEmpty()) {
-                library.writer().importBatches(batches);
-            }
+            List<ImportPlan> plans = ImportRun.run(library, SizeLimit.of(maxFileSize), files, dryRun);
             var out = spec.commandLine().getOut();
             out.print(json ? Json.write(ImportView.json(plans, dryRun)) + System.lineSeparator() : ImportView.table(plans, dryRun));
             out.flush();

@@ -1,0 +1,64 @@
+package org.kneepoint.server.http;
+
+import io.javalin.config.JavalinConfig;
+import io.javalin.http.Context;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import org.kneepoint.fitter.error.KneepointException;
+import org.kneepoint.server.text.Json;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
+/**
+ * The one place where the HTTP layer turns failures into responses: bad input 400, not found
+ * 404, conflict 409, numerical failure 422, a refused write 401/403, a body over its limit 413,
+ * anything else 500 with a generic message (the details go to the log, never to the client). The
+ * body is {@code {"error": {"code": "BAD_INPUT", "message": "..."}}}, or an {@link ErrorPage} when
+ * a browser asks for a page.
+ */
+final class ErrorMapper {
+
+    private static final Logger LOG = LoggerFactory.getLogger(ErrorMapper.class);
+
+    private ErrorMapper() {
+    }
+
+    static void install(JavalinConfig config, ErrorPage page) {
+        config.routes.exception(KneepointException.class, (error, context) -> known(error, context, page));
+        config.routes.exception(RequestRefused.class,
+                (error, context) -> respond(context, page, error.status(), error.code(), error.getMessage()));
+        config.routes.exception(Exception.class, (error, context) -> {
+            LOG.error("internal error on {} {}", context.method(), context.path(), error);
+            respond(context, page, 500, "INTERNAL", "internal error; the server log has the details");
+        });
+        config.routes.error(404, context -> {
+            String type = context.res().getContentType();
+            if (type == null || !(type.startsWith("application/json") || type.startsWith("text/html"))) {
+                respond(context, page, 404, "NOT_FOUND", "no such page or route: " + context.path());
+            }
+        });
+    }
+
+    private static void known(KneepointException error, Context context, ErrorPage page) {
+        int status = switch (error.code()) {
+            case BAD_INPUT -> 400;
+            case NOT_FOUND -> 404;
+            case CONFLICT -> 409;
+            case NUMERICAL_FAILURE -> 422;
+        };
+        respond(context, page, status, error.code().name(), error.getMessage());
+    }
+
+    /** Writes the error: an HTML page to a browser asking for a page outside {@code /api}, else the JSON body. */
+    private static void respond(Context context, ErrorPage page, int status, String code, String message) {
+        String accept = context.header("Accept");
+        if (!context.path().startsWith("/api/") && accept != null && accept.contains("text/html")) {
+            context.status(status).contentType("text/html; charset=utf-8").result(page.render(status, message));
+            return;
+        }
+        Map<String, Object> body = new LinkedHashMap<>();
+        body.put("code", code);
+        body.put("message", message);
+        context.status(status).contentType("application/json").result(Json.write(Map.of("error", body)));
+    }
+}

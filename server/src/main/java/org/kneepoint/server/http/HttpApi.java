@@ -1,0 +1,94 @@
+package org.kneepoint.server.http;
+
+import io.javalin.config.JavalinConfig;
+import io.javalin.config.SizeUnit;
+import io.javalin.http.Context;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicReference;
+import org.kneepoint.db.Library;
+import org.kneepoint.server.cli.VersionInfo;
+import org.kneepoint.server.http.ApiRoute.ApiParameter;
+import org.kneepoint.server.text.Json;
+
+/**
+ * The JSON API under {@code /api}: its routes, the OpenAPI document that lists them, and what
+ * guards every request (body size limits, the write guard, the one error mapper).
+ */
+public final class HttpApi {
+
+    private HttpApi() {
+    }
+
+    /** Installs the guards, the error mapper (with the page it shows browsers) and the API routes into a Javalin configuration. */
+    public static void install(JavalinConfig config, Library library, ServerSettings settings, ErrorPage errorPage) {
+        config.http.maxRequestSize = ServerSettings.MAX_OTHER_BYTES;
+        config.jetty.multipartConfig.maxTotalRequestSize(ServerSettings.MAX_UPLOAD_BYTES, SizeUnit.BYTES);
+        config.jetty.multipartConfig.maxFileSize(ServerSettings.MAX_UPLOAD_BYTES, SizeUnit.BYTES);
+        ErrorMapper.install(config, errorPage);
+        WriteGuard guard = new WriteGuard(settings.token());
+        config.routes.before(context -> {
+            checkSize(context);
+            guard.check(context);
+        });
+        AtomicReference<String> document = new AtomicReference<>();
+        List<ApiRoute> routes = new ArrayList<>(routes(library));
+        routes.add(ApiRoute.get("/api/openapi.json", "this document: the OpenAPI 3 description of the API",
+                context -> context.contentType("application/json").result(document.get())));
+        document.set(Json.write(OpenApiDocument.of(routes, VersionInfo.version())));
+        for (ApiRoute route : routes) {
+            if (route.method().equals("get")) {
+                config.routes.get(route.path(), route.handler());
+            } else {
+                config.routes.post(route.path(), route.handler());
+            }
+        }
+    }
+
+    /** Refuses a body larger than its kind may be: uploads (multipart) 64 MiB, anything else 64 KiB. */
+    private static void checkSize(Context context) {
+        long length = context.req().getContentLengthLong();
+        String type = context.contentType();
+        boolean upload = type != null && type.startsWith("multipart/form-data");
+        long limit = upload ? ServerSettings.MAX_UPLOAD_BYTES : ServerSettings.MAX_OTHER_BYTES;
+        if (length > limit) {
+            throw new RequestRefused(413, "TOO_LARGE", "the request body has " + length + " bytes; at most " + limit
+                    + (upload ? " bytes may be uploaded at once" : " bytes are accepted here"));
+        }
+    }
+
+    static List<ApiRoute> routes(Library library) {
+        LibraryApi grades = new LibraryApi(library);
+        ImportApi imports = new ImportApi(library);
+        PermeanceApi permeance = new PermeanceApi();
+        ApiParameter name = ApiParameter.path("name", "the grade's name", "DEMO N42SH");
+        ApiParameter temperature = ApiParameter.query("temperature", true, "temperature with its unit: C, K or F", "120C");
+        ApiParameter onSteel = ApiParameter.query("onSteel", false, "true: one pole face on a large steel plate", "false");
+        return List.of(
+                ApiRoute.get("/api/grades", "the grades in the library", grades::grades,
+                        ApiParameter.query("family", false, "only grades of this family", "sintered NdFeB")),
+                ApiRoute.get("/api/grades/{name}", "one grade and its stored curves", grades::grade, name),
+                ApiRoute.get("/api/grades/{name}/curve", "characterization at a temperature, stored or modeled", grades::curve,
+                        name, temperature),
+                ApiRoute.get("/api/grades/{name}/export", "a curve at a temperature as CSV or JSON", grades::export, name, temperature,
+                        ApiParameter.query("format", false, "csv (default) or json", "csv"),
+                        ApiParameter.query("curve", false, "normal (B, default) or intrinsic (J)", "normal"),
+                        ApiParameter.query("points", false, "resample to N points evenly spaced in H", "50"),
+                        ApiParameter.query("units", false, "si (default) or cgs", "si"),
+                        ApiParameter.query("shifted", false, "true: shift H by HcB so that B = 0 at H = 0", "false"),
+                        ApiParameter.query("bare", false, "true: two columns of numbers, no header (CSV only)", "false")),
+                ApiRoute.post("/api/import", "import uploaded files in one transaction", imports::upload,
+                        ApiParameter.query("dryRun", false, "true: check and report, store nothing", "true")),
+                ApiRoute.get("/api/permeance/cylinder", "demagnetizing factors of a cylinder or ring", permeance::cylinder,
+                        ApiParameter.query("diameter", true, "outer diameter", "10mm"),
+                        ApiParameter.query("length", true, "length along the magnetization", "5mm"),
+                        ApiParameter.query("innerDiameter", false, "bore of a ring", "4mm"), onSteel),
+                ApiRoute.get("/api/permeance/block", "demagnetizing factors of a block", permeance::block,
+                        ApiParameter.query("width", true, "edge along x", "20mm"),
+                        ApiParameter.query("depth", true, "edge along y", "10mm"),
+                        ApiParameter.query("thickness", true, "edge along the magnetization", "5mm"), onSteel),
+                ApiRoute.get("/api/permeance/spheroid", "demagnetizing factors of a spheroid", permeance::spheroid,
+                        ApiParameter.query("diameter", true, "equatorial diameter", "10mm"),
+                        ApiParameter.query("length", true, "polar diameter, along the magnetization", "10mm")));
+    }
+}

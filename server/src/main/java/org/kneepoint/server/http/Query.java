@@ -1,0 +1,117 @@
+package org.kneepoint.server.http;
+
+import io.javalin.http.Context;
+import java.util.Locale;
+import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.fitter.error.InputLocation;
+import org.kneepoint.fitter.units.Dimension;
+import org.kneepoint.fitter.units.QuantityParser;
+
+/**
+ * Reads query parameters of a request into SI values. A missing required parameter, a value of
+ * the wrong kind or a value out of range is bad input naming the parameter and what was expected.
+ */
+final class Query {
+
+    private final Context context;
+
+    Query(Context context) {
+        this.context = context;
+    }
+
+    /** The text of a parameter, or null when it is absent or blank. */
+    String text(String name) {
+        String value = context.queryParam(name);
+        return value == null || value.isBlank() ? null : value.strip();
+    }
+
+    String required(String name, String example) {
+        String value = text(name);
+        if (value == null) {
+            throw bad(name, "missing; expected e.g. " + name + "=" + example);
+        }
+        return value;
+    }
+
+    /** A temperature with its unit ("120C", "393.15K"), in kelvin, above absolute zero. */
+    double temperatureK(String name) {
+        String text = required(name, "120C");
+        double kelvin = quantity(name, text, Dimension.TEMPERATURE);
+        if (!(kelvin > 0) || kelvin > 5000) {
+            throw bad(name, "expected a temperature above absolute zero and below 5000 K, got '" + text + "'");
+        }
+        return kelvin;
+    }
+
+    /** A positive length with its unit ("10mm"), in metres, at most 100 m. */
+    double length(String name) {
+        String text = required(name, "10mm");
+        double metres = quantity(name, text, Dimension.LENGTH);
+        if (!(metres > 0) || metres > 100) {
+            throw bad(name, "expected a positive length up to 100 m, got '" + text + "'");
+        }
+        return metres;
+    }
+
+    /** An optional positive length, or null. */
+    Double optionalLength(String name) {
+        return text(name) == null ? null : length(name);
+    }
+
+    /** An optional whole number in [min, max], or null. */
+    Integer optionalInteger(String name, int min, int max) {
+        String text = text(name);
+        if (text == null) {
+            return null;
+        }
+        int value;
+        try {
+            value = Integer.parseInt(text);
+        } catch (NumberFormatException e) {
+            value = Integer.MIN_VALUE;
+        }
+        if (value < min || value > max) {
+            throw bad(name, "expected a whole number between " + min + " and " + max + ", got '" + text + "'");
+        }
+        return value;
+    }
+
+    /** An optional true/false flag, false when absent. */
+    boolean flag(String name) {
+        String text = text(name);
+        if (text == null) {
+            return false;
+        }
+        return switch (text.toLowerCase(Locale.ROOT)) {
+            case "true" -> true;
+            case "false" -> false;
+            default -> throw bad(name, "expected true or false, got '" + text + "'");
+        };
+    }
+
+    /** One of the given words (lower case), or the default when absent. */
+    String choice(String name, String fallback, String... allowed) {
+        String text = text(name);
+        if (text == null) {
+            return fallback;
+        }
+        for (String word : allowed) {
+            if (word.equals(text.toLowerCase(Locale.ROOT))) {
+                return word;
+            }
+        }
+        throw bad(name, "expected one of " + String.join(", ", allowed) + ", got '" + text + "'");
+    }
+
+    private static double quantity(String name, String text, Dimension dimension) {
+        try {
+            return QuantityParser.parse(text, dimension);
+        } catch (IllegalArgumentException e) {
+            throw bad(name, e.getMessage());
+        }
+    }
+
+    private static BadInputException bad(String name, String problem) {
+        return new BadInputException(InputLocation.of("query parameter '" + name + "'"), problem);
+    }
+}

@@ -1,0 +1,28 @@
+package org.kneepoint.server.library;
+
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.library.ImportBatch;
+import org.kneepoint.importer.csv.ReadLimits;
+
+/**
+ * One import of files, as the CLI and the web application run it: plan every file (read, check,
+ * skip what is already imported), then, unless it is a dry run, store all new batches in one
+ * transaction. On any error nothing is written.
+ */
+public final class ImportRun {
+
+    private ImportRun() {
+    }
+
+    public static List<ImportPlan> run(Library library, ReadLimits limits, List<Path> files, boolean dryRun) {
+        List<ImportPlan> plans = new ImportPlanner(limits, library.reader()).plan(files, Instant.now());
+        List<ImportBatch> batches = plans.stream().filter(plan -> !plan.alreadyImported()).map(ImportPlan::batch).toList();
+        if (!dryRun && !batches.isEmpty()) {
+            library.writer().importBatches(batches);
+        }
+        return plans;
+    }
+}

@@ -1,0 +1,75 @@
+package org.kneepoint.server.web;
+
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import org.kneepoint.db.LibraryReader;
+import org.kneepoint.fitter.curve.Characterization;
+import org.kneepoint.fitter.curve.CurveCharacterizer;
+import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.server.library.GradeCurves;
+import org.kneepoint.server.text.Temperatures;
+
+/**
+ * The Grade page ({@code /grades/{name}}): what is known of the grade, its B and J curves at every
+ * stored temperature on one chart with the knees marked, the characterization of each curve and
+ * links to export each curve.
+ */
+final class GradePage {
+
+    private GradePage() {
+    }
+
+    static String render(LibraryReader library, String name, boolean demoPresent) {
+        List<LibraryCurve> curves = GradeCurves.stored(library, name).stream()
+                .sorted(Comparator.comparing((LibraryCurve curve) -> curve.curve().temperatureK())).toList();
+        GradeInfo info = library.grade(name).orElseThrow();
+        String segment = Html.pathSegment(name);
+        StringBuilder out = new StringBuilder("<p class=\"crumbs\"><a href=\"/\">Library</a> ›</p><h1>").append(Html.text(name));
+        out.append(Layout.isDemo(name) ? " <span class=\"tag\">invented demo data</span>" : "").append("</h1>");
+        out.append("<dl class=\"facts\">").append(fact("Family", info.family())).append(fact("Supplier", info.supplier()))
+                .append(fact("Density", info.density() == null ? null : String.format(Locale.ROOT, "%.0f kg/m³", info.density())))
+                .append(fact("Notes", info.notes())).append(fact("Provenance", info.provenance())).append("</dl>");
+        out.append("<figure class=\"chart\"><img src=\"/charts/grades/").append(segment).append(".svg\" width=\"960\" height=\"560\" alt=\"")
+                .append("Demagnetization curves of ").append(Html.text(name)).append("\"><figcaption>B (solid) and J (dashed) against H at each ")
+                .append("stored temperature; rings mark the knee, where J has fallen to 0.9·Br.</figcaption></figure>");
+        out.append("<h2>Characterization</h2>").append(table(curves, segment));
+        out.append(Layout.caution());
+        return Layout.page(name, "Library", out.toString(), demoPresent);
+    }
+
+    private static String table(List<LibraryCurve> curves, String segment) {
+        StringBuilder out = new StringBuilder("<table class=\"numbers\"><thead><tr><th>Temperature</th><th>Kind</th><th>Points</th>"
+                + "<th>Br (T)</th><th>HcB (kA/m)</th><th>HcJ (kA/m)</th><th>(BH)max (kJ/m³)</th><th>Hk (kA/m)</th>"
+                + "<th>Hk/HcJ</th><th>μrec</th><th>Export</th></tr></thead><tbody>");
+        for (LibraryCurve stored : curves) {
+            Characterization c = CurveCharacterizer.characterize(stored.curve());
+            double kelvin = stored.curve().temperatureK();
+            String query = "?temperature=" + Html.pathSegment(String.format(Locale.ROOT, "%.2fK", kelvin));
+            String base = "/api/grades/" + segment + "/export" + query;
+            out.append("<tr><td>").append(Html.text(Temperatures.celsius(kelvin))).append("</td><td>")
+                    .append(stored.curve().kind().name().toLowerCase(Locale.ROOT)).append("</td>")
+                    .append(cell(stored.curve().size(), "%.0f")).append(cell(c.br(), "%.3f")).append(cell(kilo(c.hcb()), "%.0f"))
+                    .append(cell(kilo(c.hcj()), "%.0f")).append(cell(kilo(c.bhMax()), "%.1f")).append(cell(kilo(c.hk()), "%.0f"))
+                    .append(cell(c.squareness(), "%.3f")).append(cell(c.muRec(), "%.3f")).append("<td class=\"links\">")
+                    .append("<a href=\"").append(base).append("&amp;format=csv\">B–H CSV</a> ")
+                    .append("<a href=\"").append(base).append("&amp;format=csv&amp;curve=intrinsic\">J–H CSV</a> ")
+                    .append("<a href=\"").append(base).append("&amp;format=json\">JSON</a></td></tr>");
+        }
+        return out.append("</tbody></table><p class=\"hint\">— means the curve does not reach that point.</p>").toString();
+    }
+
+    private static String fact(String label, String value) {
+        return value == null || value.isBlank() ? "" : "<dt>" + label + "</dt><dd>" + Html.text(value) + "</dd>";
+    }
+
+    private static Double kilo(Double value) {
+        return value == null ? null : value / 1000.0;
+    }
+
+    private static String cell(Number value, String pattern) {
+        String text = value == null ? "—" : String.format(Locale.ROOT, pattern, value.doubleValue());
+        return "<td class=\"number\">" + text + "</td>";
+    }
+}

@@ -1,0 +1,115 @@
+package org.kneepoint.server.web;
+
+import io.javalin.config.JavalinConfig;
+import io.javalin.http.Context;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.error.KneepointException;
+import org.kneepoint.importer.csv.ReadLimits;
+import org.kneepoint.server.chart.GradeChart;
+import org.kneepoint.server.http.ServerSettings;
+import org.kneepoint.server.http.Uploads;
+import org.kneepoint.server.library.GradeCurves;
+import org.kneepoint.server.library.ImportPlan;
+import org.kneepoint.server.library.ImportRun;
+
+/** The pages and charts of the web application and the routes that serve them. */
+final class WebPages {
+
+    private static final int CHART_WIDTH = 960;
+    private static final int CHART_HEIGHT = 560;
+
+    private final Library library;
+    private final boolean tokenRequired;
+    private final ImportStaging staging;
+    private final String styleSheet;
+
+    WebPages(Library library, ServerSettings settings, ImportStaging staging) {
+        this.library = library;
+        this.tokenRequired = settings.tokenRequired();
+        this.staging = staging;
+        this.styleSheet = resource("/web/kneepoint.css");
+    }
+
+    void install(JavalinConfig config) {
+        config.routes.get("/", context -> html(context, LibraryPage.render(library.reader(), blankToNull(context.queryParam("family")),
+                context.queryParam("sort"), context.queryParam("order"))));
+        config.routes.get("/grades/{name}", context -> html(context, GradePage.render(library.reader(), context.pathParam("name"), demoPresent())));
+        config.routes.get("/charts/grades/{name}.svg", context -> {
+            String name = context.pathParam("name");
+            String svg = GradeChart.svg(name, GradeCurves.stored(library.reader(), name), CHART_WIDTH, CHART_HEIGHT);
+            context.contentType("image/svg+xml").result(svg);
+        });
+        config.routes.get("/import", context -> html(context, ImportPage.form(tokenRequired, demoPresent())));
+        config.routes.post("/import", this::check);
+        config.routes.post("/import/commit", this::commit);
+        config.routes.get("/style.css", context -> context.contentType("text/css; charset=utf-8").result(styleSheet));
+    }
+
+    private void check(Context context) {
+        Uploads uploads = null;
+        try {
+            uploads = Uploads.of(context);
+            List<ImportPlan> plans = ImportRun.run(library, new ReadLimits(ServerSettings.MAX_UPLOAD_BYTES), uploads.files(), true);
+            String key = staging.keep(uploads);
+            html(context, ImportPage.preview(plans, key, tokenRequired, demoPresent()));
+        } catch (KneepointException e) {
+            if (uploads != null) {
+                uploads.close();
+            }
+            context.status(400);
+            html(context, ImportPage.refused(e.getMessage(), tokenRequired, demoPresent()));
+        }
+    }
+
+    private void commit(Context context) {
+        Uploads uploads = staging.take(context.formParam("staged")).orElse(null);
+        if (uploads == null) {
+            context.status(400);
+            html(context, ImportPage.refused("These files are no longer waiting (the server keeps only the last few checks); "
+                    + "choose them again.", tokenRequired, demoPresent()));
+            return;
+        }
+        try (uploads) {
+            List<ImportPlan> plans = ImportRun.run(library, new ReadLimits(ServerSettings.MAX_UPLOAD_BYTES), uploads.files(), false);
+            html(context, ImportPage.done(plans, demoPresent()));
+        } catch (KneepointException e) {
+            context.status(400);
+            html(context, ImportPage.refused(e.getMessage(), tokenRequired, demoPresent()));
+        }
+    }
+
+    /** The page shown to a browser for a failed request. */
+    String error(int status, String message) {
+        String content = "<h1>" + (status == 404 ? "Not found" : "The request could not be served") + "</h1>"
+                + "<div class=\"problem\" role=\"alert\">" + Html.text(message) + "</div><p><a href=\"/\">Back to the library</a></p>";
+        return Layout.page(status == 404 ? "Not found" : "Error", "", content, false);
+    }
+
+    private boolean demoPresent() {
+        return library.reader().grades(null).stream().anyMatch(grade -> Layout.isDemo(grade.name()));
+    }
+
+    private static void html(Context context, String page) {
+        context.contentType("text/html; charset=utf-8").result(page);
+    }
+
+    private static String blankToNull(String value) {
+        return value == null || value.isBlank() ? null : value;
+    }
+
+    private static String resource(String name) {
+        try (InputStream in = WebPages.class.getResourceAsStream(name)) {
+            if (in == null) {
+                throw new IllegalStateException("missing resource " + name);
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
