@@ -42,6 +42,7 @@ public final class GradeChart {
     public static String svg(String grade, List<LibraryCurve> curves, int width, int height) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        renderer.setDrawSeriesLineAsPath(true);
         XYSeries knees = new XYSeries("knee (J = 0.9·Br)", false, true);
         List<DemagnetizationCurve> usable = curves.stream().map(LibraryCurve::curve).filter(c -> c.kind() != CurveKind.LOOP)
                 .sorted(Comparator.comparing(DemagnetizationCurve::temperatureK)).toList();
