@@ -6,6 +6,7 @@ import org.kneepoint.fitter.loadline.DesignCheckResult;
 import org.kneepoint.fitter.loadline.LoadLine;
 import org.kneepoint.fitter.loadline.LocalKneeCheck;
 import org.kneepoint.fitter.loadline.LocalKneeResult;
+import org.kneepoint.server.library.GradeModel;
 import org.kneepoint.server.text.CheckView;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
@@ -58,7 +59,7 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         LoadLine line = new LoadLine(loadLine.pc(), opposingField);
-        GradeModel model = GradeModel.of(gradeName, grade, libraryOption);
+        GradeModel model = grade.model(gradeName, libraryOption);
         DesignCheckResult result = DesignCheck.of(model.model(), line, temperature, lossLimitPercent / 100.0);
         boolean extrapolated = model.extrapolated(result);
         var out = spec.commandLine().getOut();

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.kneepoint.fitter.loadline.DutySequence;
 import org.kneepoint.fitter.loadline.DutyStepResult;
+import org.kneepoint.server.library.GradeModel;
 import org.kneepoint.server.text.DutyView;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
@@ -48,7 +49,7 @@ final class DutyCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         double pc = loadLine.pc();
-        GradeModel model = GradeModel.of(gradeName, grade, libraryOption);
+        GradeModel model = grade.model(gradeName, libraryOption);
         List<DutyStepResult> results = DutySequence.run(model.model(), pc, steps.list());
         boolean extrapolated = steps.list().stream().anyMatch(step -> model.extrapolated().test(step.temperature()));
         var out = spec.commandLine().getOut();

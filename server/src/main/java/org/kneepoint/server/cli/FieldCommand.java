@@ -7,6 +7,8 @@ import org.kneepoint.fitter.shape.BlockShape;
 import org.kneepoint.fitter.shape.CylinderShape;
 import org.kneepoint.fitter.shape.MagnetShape;
 import org.kneepoint.fitter.shape.RingShape;
+import org.kneepoint.server.library.Lengths;
+import org.kneepoint.server.library.Position;
 import org.kneepoint.server.text.FieldView;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
@@ -41,7 +43,7 @@ final class FieldCommand implements Runnable {
 
         @Option(names = "--at", required = true, converter = PositionConverter.class,
                 description = "The point x,y,z; a unit after the last number applies to all three, e.g. 2,0,3mm.")
-        PositionConverter.Position at;
+        Position at;
 
         @Option(names = "--json", description = "Print one JSON document (SI units).")
         boolean json;

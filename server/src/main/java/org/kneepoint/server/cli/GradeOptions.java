@@ -1,19 +1,17 @@
 package org.kneepoint.server.cli;
 
+import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.fitter.loadline.LinearRecoilKnee;
-import org.kneepoint.fitter.loadline.LinearTemperatureLaw;
+import org.kneepoint.server.library.GradeModel;
+import org.kneepoint.server.library.TypedGrade;
 import picocli.CommandLine.Option;
 
 /**
- * A grade typed in on the command line: a linear-recoil curve with a knee at the reference
- * temperature and linear temperature coefficients ({@link LinearTemperatureLaw}). None of the
- * options is given when the grade comes from the library instead.
+ * A grade typed in on the command line ({@link TypedGrade}): a linear-recoil curve with a knee at the reference
+ * temperature and linear temperature coefficients. None of the options is given when the grade comes from the
+ * library instead.
  */
 final class GradeOptions {
-
-    /** Knee width w/HcJ used when no knee field is given: an assumed square knee, not data. */
-    static final double DEFAULT_RELATIVE_KNEE_WIDTH = 0.02;
 
     @Option(names = "--br", converter = QuantityConverters.FluxDensity.class,
             description = "Remanence Br at the reference temperature, e.g. 1.3T.")
@@ -43,20 +41,18 @@ final class GradeOptions {
             description = "Temperature the values and coefficients refer to (default: 20C).")
     Double referenceTemperature;
 
-    /** Whether any of the options was given. */
-    boolean given() {
-        return br != null || muRec != null || hcj != null || knee != null || alpha != null || beta != null
-                || referenceTemperature != null;
-    }
-
-    LinearTemperatureLaw law() {
-        if (br == null || muRec == null || hcj == null) {
-            throw new BadInputException("name a GRADE of the library, or type one in with --br, --mu-rec and --hcj");
+    /** The model of {@code grade} (null: the one typed in) from the library {@code libraryOption} names; never both. */
+    GradeModel model(String grade, LibraryOption libraryOption) {
+        TypedGrade typed = new TypedGrade(br, muRec, hcj, knee, alpha, beta, referenceTemperature);
+        if (grade == null) {
+            return GradeModel.typed(typed.law("name a GRADE of the library, or type one in with --br, --mu-rec and --hcj"));
         }
-        LinearRecoilKnee curve = knee == null
-                ? new LinearRecoilKnee(br, muRec, hcj, DEFAULT_RELATIVE_KNEE_WIDTH * hcj)
-                : LinearRecoilKnee.withKneeField(br, muRec, hcj, knee);
-        return LinearTemperatureLaw.ofPercentPerKelvin(curve, alpha == null ? 0.0 : alpha, beta == null ? 0.0 : beta,
-                referenceTemperature == null ? LinearTemperatureLaw.DEFAULT_REFERENCE_TEMPERATURE : referenceTemperature);
+        if (typed.given()) {
+            throw new BadInputException("give either a GRADE of the library or the typed-in --br, --mu-rec, --hcj, --knee,"
+                    + " --alpha, --beta, --reference-temperature, not both");
+        }
+        try (Library library = libraryOption.open()) {
+            return GradeModel.stored(library.reader(), grade);
+        }
     }
 }

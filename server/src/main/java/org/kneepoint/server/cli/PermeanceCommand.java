@@ -10,6 +10,7 @@ import org.kneepoint.fitter.shape.MagnetShape;
 import org.kneepoint.fitter.shape.MagneticCircuit;
 import org.kneepoint.fitter.shape.RingShape;
 import org.kneepoint.fitter.shape.SpheroidShape;
+import org.kneepoint.server.library.Lengths;
 import org.kneepoint.server.text.Json;
 import org.kneepoint.server.text.PermeanceView;
 import picocli.CommandLine.Command;

@@ -3,12 +3,12 @@ package org.kneepoint.server.cli;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.loadline.LoadLine;
 import org.kneepoint.fitter.select.RankingOrder;
 import org.kneepoint.fitter.select.Requirements;
 import org.kneepoint.server.library.LibrarySelection;
 import org.kneepoint.server.library.SelectionRow;
+import org.kneepoint.server.library.SelectionSort;
 import org.kneepoint.server.text.Json;
 import org.kneepoint.server.text.SelectionView;
 import picocli.CommandLine.Command;
@@ -64,7 +64,7 @@ final class SelectCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        RankingOrder order = order();
+        RankingOrder order = SelectionSort.of(sort);
         Requirements requirements = new Requirements(new LoadLine(loadLine.pc(), opposingField), temperature, minimumFluxDensity,
                 maximumLossPercent / 100.0);
         List<SelectionRow> rows;
@@ -73,28 +73,8 @@ final class SelectCommand implements Callable<Integer> {
         }
         var out = spec.commandLine().getOut();
         out.print(json ? Json.write(SelectionView.json(rows, requirements)) + System.lineSeparator()
-                : SelectionView.table(rows, requirements, loadLine.describe(), describe(order)));
+                : SelectionView.table(rows, requirements, loadLine.describe(), SelectionSort.describe(order)));
         out.flush();
         return 0;
-    }
-
-    private RankingOrder order() {
-        return switch (sort) {
-            case "flux" -> RankingOrder.FLUX_DENSITY;
-            case "margin" -> RankingOrder.KNEE_MARGIN;
-            case "loss" -> RankingOrder.IRREVERSIBLE_LOSS;
-            case "temperature" -> RankingOrder.MAX_WORKING_TEMPERATURE;
-            default -> throw new BadInputException("--sort must be flux, margin, loss or temperature, got '" + sort + "'");
-        };
-    }
-
-    private static String describe(RankingOrder order) {
-        return switch (order) {
-            case FLUX_DENSITY -> "flux density at the operating point, highest first";
-            case KNEE_MARGIN -> "margin to the knee, largest first";
-            case IRREVERSIBLE_LOSS -> "irreversible loss, smallest first";
-            case MAX_WORKING_TEMPERATURE -> "maximum working temperature, highest first";
-            case PRICE -> "price, cheapest first";
-        };
     }
 }

@@ -61,6 +61,8 @@ public final class HttpApi {
         LibraryApi grades = new LibraryApi(library);
         ImportApi imports = new ImportApi(library);
         PermeanceApi permeance = new PermeanceApi();
+        DesignApi design = new DesignApi(library);
+        MaterialApi materials = new MaterialApi(library);
         ApiParameter name = ApiParameter.path("name", "the grade's name", "DEMO N42SH");
         ApiParameter temperature = ApiParameter.query("temperature", true, "temperature with its unit: C, K or F", "120C");
         ApiParameter onSteel = ApiParameter.query("onSteel", false, "true: one pole face on a large steel plate", "false");
@@ -89,6 +91,20 @@ public final class HttpApi {
                         ApiParameter.query("thickness", true, "edge along the magnetization", "5mm"), onSteel),
                 ApiRoute.get("/api/permeance/spheroid", "demagnetizing factors of a spheroid", permeance::spheroid,
                         ApiParameter.query("diameter", true, "equatorial diameter", "10mm"),
-                        ApiParameter.query("length", true, "polar diameter, along the magnetization", "10mm")));
+                        ApiParameter.query("length", true, "polar diameter, along the magnetization", "10mm")),
+                ApiRoute.get("/api/check", "a grade on its load line: operating point, knee margin, losses, maximum temperature",
+                        design::check, DesignParameters.check()),
+                ApiRoute.get("/api/select", "every grade of the library ranked against the requirements", design::select,
+                        DesignParameters.select()),
+                ApiRoute.get("/api/field/cylinder", "flux density B at a point near a cylinder", design::cylinder,
+                        DesignParameters.field("diameter", "length")),
+                ApiRoute.get("/api/field/ring", "flux density B at a point near a ring", design::ring,
+                        DesignParameters.field("diameter", "innerDiameter", "length")),
+                ApiRoute.get("/api/field/block", "flux density B at a point near a block", design::block,
+                        DesignParameters.field("width", "depth", "thickness")),
+                ApiRoute.get("/api/materials", "the materials with stored susceptibility points", materials::materials),
+                ApiRoute.get("/api/materials/{name}", "one material's stored susceptibility points", materials::material,
+                        ApiParameter.path("name", "the material's name", "DEMO copper")),
+                ApiRoute.get("/api/fits", "every stored fit, by time", materials::fits));
     }
 }

@@ -2,16 +2,20 @@ package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
 import java.util.Locale;
+import java.util.regex.Pattern;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityParser;
+import org.kneepoint.server.library.Position;
 
 /**
  * Reads query parameters of a request into SI values. A missing required parameter, a value of
  * the wrong kind or a value out of range is bad input naming the parameter and what was expected.
  */
 final class Query {
+
+    private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
 
     private final Context context;
 
@@ -101,6 +105,58 @@ final class Query {
             }
         }
         throw bad(name, "expected one of " + String.join(", ", allowed) + ", got '" + text + "'");
+    }
+
+    /** An optional temperature in kelvin, or null. */
+    Double optionalTemperatureK(String name) {
+        return text(name) == null ? null : temperatureK(name);
+    }
+
+    /** An optional quantity of a dimension with its unit, in SI, or null; {@code example} shows the form expected. */
+    Double optionalQuantity(String name, Dimension dimension, String example) {
+        return text(name) == null ? null : quantity(name, dimension, example);
+    }
+
+    /** A required quantity of a dimension with its unit, in SI, finite and at most 1e12 in size. */
+    double quantity(String name, Dimension dimension, String example) {
+        String text = required(name, example);
+        double value = text.equals("0") ? 0.0 : quantity(name, text, dimension);
+        if (!Double.isFinite(value) || Math.abs(value) > 1e12) {
+            throw bad(name, "expected a value such as " + example + ", got '" + text + "'");
+        }
+        return value;
+    }
+
+    /** An optional plain number after stripping {@code suffix} (which must be there when not empty), or null. */
+    Double optionalNumber(String name, String suffix, String example) {
+        String text = text(name);
+        if (text == null) {
+            return null;
+        }
+        String digits = text.replace('\u2212', '-');
+        if (!suffix.isEmpty()) {
+            if (!digits.endsWith(suffix)) {
+                throw bad(name, "expected a value such as " + example + ", got '" + text + "' (no " + suffix + ")");
+            }
+            digits = digits.substring(0, digits.length() - suffix.length()).strip();
+        }
+        if (NUMBER.matcher(digits).matches()) {
+            double value = Double.parseDouble(digits);
+            if (Math.abs(value) <= 1e12) {
+                return value;
+            }
+        }
+        throw bad(name, "expected a value such as " + example + ", got '" + text + "'");
+    }
+
+    /** A point x,y,z with a length unit ({@link Position#parse}), required. */
+    Position position(String name) {
+        String text = required(name, "2,0,3mm");
+        try {
+            return Position.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw bad(name, e.getMessage());
+        }
     }
 
     private static double quantity(String name, String text, Dimension dimension) {

@@ -1,6 +1,7 @@
 package org.kneepoint.server.text;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
@@ -17,6 +18,15 @@ public final class Json {
             return MAPPER.writeValueAsString(value);
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("cannot write JSON for " + value.getClass().getSimpleName(), e);
+        }
+    }
+
+    /** Parses a JSON document (a stored fit's parameters) into a tree that {@link #write} writes back as it was. */
+    public static JsonNode read(String json) {
+        try {
+            return MAPPER.readTree(json);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("stored JSON does not parse: " + e.getOriginalMessage(), e);
         }
     }
 }

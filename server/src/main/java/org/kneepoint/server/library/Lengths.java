@@ -1,4 +1,4 @@
-package org.kneepoint.server.cli;
+package org.kneepoint.server.library;
 
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityFormatter;
@@ -6,14 +6,14 @@ import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
 
 /** Lengths in the commands' one-line descriptions, in millimetres. */
-final class Lengths {
+public final class Lengths {
 
     private static final Unit MILLIMETRE = UnitCatalog.require("mm", Dimension.LENGTH);
 
     private Lengths() {
     }
 
-    static String mm(double metres) {
+    public static String mm(double metres) {
         return QuantityFormatter.format(metres, MILLIMETRE, 5);
     }
 }

@@ -1,0 +1,61 @@
+package org.kneepoint.server.http;
+
+import io.javalin.http.Context;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.field.MagnetField;
+import org.kneepoint.fitter.shape.BlockShape;
+import org.kneepoint.fitter.shape.CylinderShape;
+import org.kneepoint.fitter.shape.MagnetShape;
+import org.kneepoint.fitter.shape.RingShape;
+import org.kneepoint.fitter.units.Dimension;
+import org.kneepoint.server.http.DesignRequests.CheckRun;
+import org.kneepoint.server.http.DesignRequests.SelectionRun;
+import org.kneepoint.server.library.Position;
+import org.kneepoint.server.text.CheckView;
+import org.kneepoint.server.text.FieldView;
+import org.kneepoint.server.text.SelectionView;
+
+/**
+ * The design routes: {@code /api/check}, {@code /api/select} and {@code /api/field/{shape}}, answering what
+ * {@code kneepoint check}, {@code select} and {@code field} print with {@code --json}.
+ */
+final class DesignApi {
+
+    private final Library library;
+
+    DesignApi(Library library) {
+        this.library = library;
+    }
+
+    void check(Context context) {
+        CheckRun run = DesignRequests.check(context, library.reader());
+        LibraryApi.json(context, CheckView.json(run.result(), run.extrapolated()));
+    }
+
+    void select(Context context) {
+        SelectionRun run = DesignRequests.select(context, library.reader());
+        LibraryApi.json(context, SelectionView.json(run.rows(), run.requirements()));
+    }
+
+    void cylinder(Context context) {
+        Query query = new Query(context);
+        field(context, query, new CylinderShape(query.length("diameter"), query.length("length")));
+    }
+
+    void ring(Context context) {
+        Query query = new Query(context);
+        field(context, query, new RingShape(query.length("diameter"), query.length("innerDiameter"), query.length("length")));
+    }
+
+    void block(Context context) {
+        Query query = new Query(context);
+        field(context, query, new BlockShape(query.length("width"), query.length("depth"), query.length("thickness")));
+    }
+
+    private static void field(Context context, Query query, MagnetShape shape) {
+        double br = query.quantity("br", Dimension.FLUX_DENSITY, "1.3T");
+        Position at = query.position("at");
+        MagnetField field = MagnetField.of(shape, br);
+        LibraryApi.json(context, FieldView.json(at.toArray(), field.fluxDensity(at.x(), at.y(), at.z())));
+    }
+}
