@@ -86,6 +86,26 @@ class HttpBadInputTest {
         "/api/permeance/cylinder?diameter=10mm&length=5mm&innerDiameter=12mm|inner",
         "/api/permeance/block?width=20mm&depth=10mm&thickness=5mm&onSteel=maybe|onSteel",
         "/api/permeance/spheroid?diameter=10mm&length=10mm&onSteel=true|onSteel",
+        "/api/check?grade=DEMO%20SmCo%2028%2F200&temperature=120C|load line",
+        "/api/check?pc=2&temperature=120C|grade",
+        "/api/check?pc=many&grade=DEMO%20SmCo%2028%2F200&temperature=120C|pc",
+        "/api/check?pc=-1&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|permeance",
+        "/api/check?pc=2&grade=DEMO%20SmCo%2028%2F200&br=1.3T&temperature=120C|not both",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&lossLimit=1|lossLimit",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&alpha=-0.12|alpha",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&opposingField=-5kA%2Fm|opposing field",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1e99A%2Fm&temperature=120C|hcj",
+        "/api/check?diameter=10mm&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|length",
+        "/api/check?diameter=10mm&length=5mm&factor=worst&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|factor",
+        "/api/select?pc=2|temperature",
+        "/api/select?pc=2&temperature=100C&sort=price|sort",
+        "/api/select?pc=2&temperature=100C&minFluxDensity=1kg|minFluxDensity",
+        "/api/select?pc=2&temperature=100C&maxLoss=150%25|loss",
+        "/api/field/cylinder?diameter=10mm&length=5mm&br=1.3T|at",
+        "/api/field/cylinder?diameter=10mm&length=5mm&br=1.3T&at=1,2mm|at",
+        "/api/field/cylinder?diameter=10mm&length=5mm&br=1.3T&at=1,2,3|at",
+        "/api/field/ring?diameter=10mm&length=5mm&br=1.3T&at=1,2,3mm|innerDiameter",
+        "/api/field/block?width=10mm&depth=8mm&thickness=4mm&at=1,2,3mm|br",
     })
     void bad_query_parameters_are_bad_input_naming_the_parameter(String request, String named) throws Exception {
         JsonNode error = error(server.get(request), 400, "BAD_INPUT");
@@ -98,6 +118,8 @@ class HttpBadInputTest {
         error(server.get("/api/grades/No%20Such%20Grade/curve?temperature=20C"), 404, "NOT_FOUND");
         error(server.get("/api/grades/No%20Such%20Grade/export?temperature=20C"), 404, "NOT_FOUND");
         error(server.get("/grades/No%20Such%20Grade"), 404, "NOT_FOUND");
+        error(server.get("/api/check?grade=No%20Such%20Grade&pc=2&temperature=20C"), 404, "NOT_FOUND");
+        error(server.get("/api/materials/No%20Such%20Material"), 404, "NOT_FOUND");
     }
 
     @Test
