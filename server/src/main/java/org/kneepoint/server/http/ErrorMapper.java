@@ -40,13 +40,7 @@ final class ErrorMapper {
     }
 
     private static void known(KneepointException error, Context context, ErrorPage page) {
-        int status = switch (error.code()) {
-            case BAD_INPUT -> 400;
-            case NOT_FOUND -> 404;
-            case CONFLICT -> 409;
-            case NUMERICAL_FAILURE -> 422;
-        };
-        respond(context, page, status, error.code().name(), error.getMessage());
+        respond(context, page, ErrorStatus.of(error), error.code().name(), error.getMessage());
     }
 
     /** Writes the error: an HTML page to a browser asking for a page outside {@code /api}, else the JSON body. */

@@ -1,10 +1,9 @@
 package org.kneepoint.server.web;
 
-import java.util.List;
 import org.kneepoint.server.text.Cautions;
 
 /**
- * The frame of every page: head with the style sheet, a top bar with the three sections, the
+ * The frame of every page: head with the style sheet, a top bar with the sections, the
  * page's own content, and a footer that says when invented demo grades are in the library.
  */
 final class Layout {
@@ -22,15 +21,20 @@ final class Layout {
                 + "<title>" + Html.text(title) + " · Kneepoint</title>"
                 + "<link rel=\"stylesheet\" href=\"/style.css\"></head><body>"
                 + "<header class=\"bar\"><span class=\"mark\">Kneepoint</span><nav>"
-                + tab("/", "Library", section) + tab("/import", "Import", section)
+                + tab("/", "Library", section) + tab("/check", "Check", section) + tab("/select", "Select", section)
+                + tab("/import", "Import", section)
                 + "</nav></header><main>" + content + "</main>" + footer(demoPresent) + "</body></html>\n";
     }
 
     /** The caution shown beside results that feed a safety decision. */
     static String caution() {
+        return cautions(false);
+    }
+
+    /** The cautions of a result, with the note on extrapolation first when it rests on an extrapolated model. */
+    static String cautions(boolean extrapolated) {
         StringBuilder out = new StringBuilder("<aside class=\"caution\"><strong>Caution.</strong> ");
-        List<String> lines = Cautions.SAFETY;
-        for (String line : lines) {
+        for (String line : Cautions.of(extrapolated)) {
             out.append(Html.text(line)).append(' ');
         }
         return out.append("</aside>").toString();

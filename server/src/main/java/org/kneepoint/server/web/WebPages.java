@@ -11,6 +11,10 @@ import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.KneepointException;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.chart.GradeChart;
+import org.kneepoint.server.http.DesignRequests;
+import org.kneepoint.server.http.ErrorStatus;
+import org.kneepoint.server.http.DesignRequests.CheckRun;
+import org.kneepoint.server.http.DesignRequests.SelectionRun;
 import org.kneepoint.server.http.ServerSettings;
 import org.kneepoint.server.http.Uploads;
 import org.kneepoint.server.library.GradeCurves;
@@ -44,13 +48,43 @@ final class WebPages {
             String svg = GradeChart.svg(name, GradeCurves.stored(library.reader(), name), CHART_WIDTH, CHART_HEIGHT);
             context.contentType("image/svg+xml").result(svg);
         });
+        config.routes.get("/check", this::check);
+        config.routes.get("/select", this::select);
         config.routes.get("/import", context -> html(context, ImportPage.form(tokenRequired, demoPresent())));
-        config.routes.post("/import", this::check);
+        config.routes.post("/import", this::checkUpload);
         config.routes.post("/import/commit", this::commit);
         config.routes.get("/style.css", context -> context.contentType("text/css; charset=utf-8").result(styleSheet));
     }
 
     private void check(Context context) {
+        CheckRun run = null;
+        String problem = null;
+        if (!context.queryParamMap().isEmpty()) {
+            try {
+                run = DesignRequests.check(context, library.reader());
+            } catch (KneepointException e) {
+                context.status(ErrorStatus.of(e));
+                problem = e.getMessage();
+            }
+        }
+        html(context, CheckPage.render(library.reader(), context::queryParam, run, problem, demoPresent()));
+    }
+
+    private void select(Context context) {
+        SelectionRun run = null;
+        String problem = null;
+        if (!context.queryParamMap().isEmpty()) {
+            try {
+                run = DesignRequests.select(context, library.reader());
+            } catch (KneepointException e) {
+                context.status(ErrorStatus.of(e));
+                problem = e.getMessage();
+            }
+        }
+        html(context, SelectPage.render(library.reader(), context::queryParam, run, problem, demoPresent()));
+    }
+
+    private void checkUpload(Context context) {
         Uploads uploads = null;
         try {
             uploads = Uploads.of(context);
