@@ -4,9 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -151,5 +153,66 @@ class WebPagesTest {
         assertTrue(response.headers().firstValue("Content-Type").orElse("").startsWith("text/html"));
         assertTrue(response.body().contains("&lt;b&gt;None&lt;/b&gt;"));
         assertFalse(response.body().contains("<b>None"));
+    }
+
+    @Test
+    void every_page_links_the_check_and_select_pages_in_its_header() throws Exception {
+        String html = page("/");
+        assertTrue(html.contains("<a href=\"/check\">Check</a>"));
+        assertTrue(html.contains("<a href=\"/select\">Select</a>"));
+        assertTrue(page("/check").contains("<a href=\"/check\" aria-current=\"page\">Check</a>"));
+    }
+
+    @Test
+    void check_page_shows_the_form_with_the_library_grades_escaped() throws Exception {
+        String html = page("/check");
+        for (String field : new String[] {"grade", "br", "muRec", "hcj", "pc", "diameter", "width", "temperature", "opposingField"}) {
+            assertTrue(html.contains("name=\"" + field + "\""), field);
+        }
+        assertTrue(html.contains("<option value=\"DEMO NdFeB 42/100\">DEMO NdFeB 42/100</option>"));
+        assertTrue(html.contains(ESCAPED));
+        assertFalse(html.contains(SCRIPT));
+        assertFalse(html.contains("Caution."));
+    }
+
+    @Test
+    void check_page_runs_the_check_and_shows_the_numbers_of_the_api_and_the_cautions() throws Exception {
+        String query = "?grade=DEMO%20NdFeB%2042%2F100&diameter=10mm&length=5mm&temperature=120C&opposingField=200kA%2Fm";
+        HttpResponse<String> api = server.get("/api/check" + query);
+        assertEquals(200, api.statusCode(), api.body());
+        JsonNode check = RunningServer.json(api);
+        String html = page("/check" + query);
+        assertTrue(html.contains(String.format(Locale.ROOT, "B = %.4f T", check.get("operatingPoint").get("b").asDouble())), html);
+        assertTrue(html.contains(String.format(Locale.ROOT, "%.2f %%", check.get("irreversibleLossPercent").asDouble())));
+        assertTrue(html.contains(String.format(Locale.ROOT, "%.4g", check.get("pc").asDouble())));
+        assertTrue(html.contains("value=\"10mm\""));
+        assertTrue(html.contains("Caution.") && html.contains("implanted medical devices"));
+        assertEquals(check.get("extrapolated").asBoolean(), html.contains("extrapolated beyond the measured temperatures"));
+    }
+
+    @Test
+    void check_page_with_bad_input_shows_the_message_and_writes_nothing() throws Exception {
+        Map<String, Integer> before = server.rowCounts();
+        HttpResponse<String> response = server.get("/check?pc=2&temperature=hot&grade=" + SCRIPT_PATH.substring(1));
+        assertEquals(400, response.statusCode());
+        assertTrue(response.headers().firstValue("Content-Type").orElse("").startsWith("text/html"));
+        assertTrue(response.body().contains("No result.") && response.body().contains("temperature"));
+        assertTrue(response.body().contains("value=\"hot\""));
+        assertFalse(response.body().contains(SCRIPT));
+        assertEquals(before, server.rowCounts());
+    }
+
+    @Test
+    void select_page_ranks_every_grade_with_results_reasons_and_cautions() throws Exception {
+        assertTrue(page("/select").contains("name=\"minFluxDensity\""));
+        String html = page("/select?pc=2&temperature=100C&minFluxDensity=0.5T&maxLoss=2%25");
+        JsonNode ranked = RunningServer.json(server.get("/api/select?pc=2&temperature=100C&minFluxDensity=0.5T&maxLoss=2%25"));
+        String first = ranked.get(0).get("grade").asText();
+        assertTrue(html.contains(">pass<") && html.contains(">fail<") && html.contains(">n/a<"));
+        assertTrue(html.indexOf(">" + first + "<") < html.indexOf(">fail<"), html);
+        assertTrue(html.contains("is below the minimum") || html.contains("exceeds the maximum"));
+        assertTrue(html.contains(ESCAPED) && !html.contains(SCRIPT));
+        assertTrue(html.contains("not assessable"));
+        assertTrue(html.contains("Caution."));
     }
 }
