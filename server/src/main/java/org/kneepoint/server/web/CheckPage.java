@@ -13,7 +13,7 @@ import org.kneepoint.server.text.Temperatures;
 
 /**
  * The Check page ({@code /check}): a form — a grade of the library or one typed in, the load line, temperature,
- * opposing field, loss limit — and, once sent, the check's results with its cautions. The form sends the query
+ * opposing field, loss limit — and, once sent, the check's results, the operating-point chart and the cautions. The form sends the query
  * parameters of {@code GET /api/check}, so the page and the route compute the same check.
  */
 final class CheckPage {
@@ -21,7 +21,8 @@ final class CheckPage {
     private CheckPage() {
     }
 
-    static String render(LibraryReader library, UnaryOperator<String> values, CheckRun run, String problem, boolean demoPresent) {
+    static String render(LibraryReader library, UnaryOperator<String> values, String query, CheckRun run, String problem,
+            boolean demoPresent) {
         StringBuilder out = new StringBuilder("<h1>Check a design</h1>").append(FormFields.problem(problem));
         out.append("<form class=\"design\" method=\"get\" action=\"/check\">").append(grade(library, values))
                 .append(FormFields.loadLine(values))
@@ -31,7 +32,7 @@ final class CheckPage {
                 .append(FormFields.text(values, "lossLimit", "loss limit", "1%"))
                 .append("</div></fieldset><button type=\"submit\" class=\"primary\">Check</button></form>");
         if (run != null) {
-            out.append(results(run));
+            out.append(results(run, query));
         }
         return Layout.page("Check", "Check", out.toString(), demoPresent);
     }
@@ -50,7 +51,7 @@ final class CheckPage {
                 + FormFields.text(values, "referenceTemperature", "at", "20C") + "</div></fieldset>";
     }
 
-    private static String results(CheckRun run) {
+    private static String results(CheckRun run, String query) {
         DesignCheckResult result = run.result();
         OperatingPoint point = result.point();
         StringBuilder out = new StringBuilder("<h2>Results at ").append(Html.text(Temperatures.celsius(result.temperature())))
@@ -67,7 +68,10 @@ final class CheckPage {
         if (run.extrapolated()) {
             out.append(row("extrapolated", "yes: T, T0 or the maximum working temperature lies outside the measured temperatures"));
         }
-        return out.append("</tbody></table>").append(Layout.cautions(run.extrapolated())).toString();
+        out.append("</tbody></table><figure class=\"chart\"><img src=\"/charts/check.svg?").append(Html.text(query))
+                .append("\" width=\"960\" height=\"560\" alt=\"Operating point on the load line\"><figcaption>B (solid) and J (dashed) ")
+                .append("of the grade at the check's temperature, the load line and a ring at the operating point.</figcaption></figure>");
+        return out.append(Layout.cautions(run.extrapolated())).toString();
     }
 
     private static String row(String name, String value) {

@@ -10,6 +10,7 @@ import java.util.List;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.KneepointException;
 import org.kneepoint.importer.csv.ReadLimits;
+import org.kneepoint.server.chart.CheckChart;
 import org.kneepoint.server.chart.GradeChart;
 import org.kneepoint.server.http.DesignRequests;
 import org.kneepoint.server.http.ErrorStatus;
@@ -20,6 +21,7 @@ import org.kneepoint.server.http.Uploads;
 import org.kneepoint.server.library.GradeCurves;
 import org.kneepoint.server.library.ImportPlan;
 import org.kneepoint.server.library.ImportRun;
+import org.kneepoint.server.text.Temperatures;
 
 /** The pages and charts of the web application and the routes that serve them. */
 final class WebPages {
@@ -49,6 +51,13 @@ final class WebPages {
             context.contentType("image/svg+xml").result(svg);
         });
         config.routes.get("/check", this::check);
+        config.routes.get("/charts/check.svg", context -> {
+            CheckRun run = DesignRequests.check(context, library.reader());
+            String title = "Operating point at " + Temperatures.celsius(run.result().temperature());
+            String svg = CheckChart.svg(title, run.model().model().at(run.result().temperature()), run.result().loadLine(),
+                    run.result().point(), CHART_WIDTH, CHART_HEIGHT);
+            context.contentType("image/svg+xml").result(svg);
+        });
         config.routes.get("/select", this::select);
         config.routes.get("/import", context -> html(context, ImportPage.form(tokenRequired, demoPresent())));
         config.routes.post("/import", this::checkUpload);
@@ -67,7 +76,7 @@ final class WebPages {
                 problem = e.getMessage();
             }
         }
-        html(context, CheckPage.render(library.reader(), context::queryParam, run, problem, demoPresent()));
+        html(context, CheckPage.render(library.reader(), context::queryParam, context.queryString(), run, problem, demoPresent()));
     }
 
     private void select(Context context) {
