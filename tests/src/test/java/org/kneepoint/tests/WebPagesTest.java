@@ -188,6 +188,20 @@ class WebPagesTest {
         assertTrue(html.contains("value=\"10mm\""));
         assertTrue(html.contains("Caution.") && html.contains("implanted medical devices"));
         assertEquals(check.get("extrapolated").asBoolean(), html.contains("extrapolated beyond the measured temperatures"));
+        assertTrue(html.contains("<img src=\"/charts/check.svg" + query.replace("&", "&amp;") + "\""));
+    }
+
+    @Test
+    void the_check_chart_is_svg_with_the_curves_the_load_line_and_the_operating_point() throws Exception {
+        HttpResponse<String> chart = server.get("/charts/check.svg?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=80C"
+                + "&alpha=-0.12%25%2FK&beta=-0.6%25%2FK");
+        assertEquals(200, chart.statusCode(), chart.body());
+        assertTrue(chart.headers().firstValue("Content-Type").orElse("").startsWith("image/svg+xml"));
+        String svg = chart.body();
+        assertTrue(svg.contains("field strength H (kA/m)") && svg.contains("flux density B, polarization J (T)"));
+        assertTrue(svg.contains("B (normal curve)") && svg.contains("J (intrinsic curve)"));
+        assertTrue(svg.contains("load line, Pc = 2.00") && svg.contains("operating point"));
+        assertTrue(svg.contains("Operating point at 80 °C"));
     }
 
     @Test
