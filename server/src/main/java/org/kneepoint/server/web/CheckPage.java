@@ -48,7 +48,7 @@ final class CheckPage {
                 + FormFields.text(values, "br", "Br", "1.3T") + FormFields.text(values, "muRec", "μrec", "1.05")
                 + FormFields.text(values, "hcj", "HcJ", "1600kA/m") + FormFields.text(values, "knee", "Hk", "1450kA/m")
                 + FormFields.text(values, "alpha", "α of Br", "-0.12%/K") + FormFields.text(values, "beta", "β of HcJ", "-0.6%/K")
-                + FormFields.text(values, "referenceTemperature", "at", "20C") + "</div></fieldset>";
+                + FormFields.text(values, "referenceTemperature", "values at", "20C") + "</div></fieldset>";
     }
 
     private static String results(CheckRun run, String query) {
