@@ -40,6 +40,21 @@ public final class GradeChart {
 
     /** The chart of these curves (loops are left out) as an SVG document of the given size in pixels. */
     public static String svg(String grade, List<LibraryCurve> curves, int width, int height) {
+        SVGGraphics2D graphics = new SVGGraphics2D(width, height);
+        chart(grade, curves).draw(graphics, new Rectangle(0, 0, width, height));
+        return graphics.getSVGDocument();
+    }
+
+    /** The same chart as PNG bytes. */
+    public static byte[] png(String grade, List<LibraryCurve> curves, int width, int height) {
+        try {
+            return org.jfree.chart.ChartUtils.encodeAsPNG(chart(grade, curves).createBufferedImage(width, height));
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException("cannot encode the chart as PNG", e);
+        }
+    }
+
+    private static JFreeChart chart(String grade, List<LibraryCurve> curves) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         renderer.setDrawSeriesLineAsPath(true);
@@ -78,9 +93,7 @@ public final class GradeChart {
         LegendTitle legend = chart.getLegend();
         legend.setPosition(RectangleEdge.RIGHT);
         ChartStyle.apply(chart);
-        SVGGraphics2D graphics = new SVGGraphics2D(width, height);
-        chart.draw(graphics, new Rectangle(0, 0, width, height));
-        return graphics.getSVGDocument();
+        return chart;
     }
 
     /** The highest B or J of the curves: the flux axis shows the second quadrant up to it (B below 0 is left out). */
