@@ -56,12 +56,25 @@ final class CheckCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print one JSON document (SI units).")
     private boolean json;
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report (inputs, results, chart, assumptions, sources, cautions).")
+    private java.nio.file.Path report;
+
     @Override
     public Integer call() {
         LoadLine line = new LoadLine(loadLine.pc(), opposingField);
         GradeModel model = grade.model(gradeName, libraryOption);
         DesignCheckResult result = DesignCheck.of(model.model(), line, temperature, lossLimitPercent / 100.0);
         boolean extrapolated = model.extrapolated(result);
+        if (report != null) {
+            if (!report.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".html")) {
+                throw new org.kneepoint.fitter.error.BadInputException(org.kneepoint.fitter.error.InputLocation.of("option --report"),
+                        "the report is an .html file, got '" + report + "'");
+            }
+            var run = new org.kneepoint.server.http.DesignRequests.CheckRun(model, loadLine.spec(), result, lossLimitPercent / 100.0, extrapolated);
+            String inputs = String.join(" ", spec.commandLine().getParseResult().originalArgs());
+            OutputFile.write(report, org.kneepoint.server.web.CheckReport.html(run, "kneepoint " + inputs, VersionInfo.version()));
+        }
         var out = spec.commandLine().getOut();
         if (json) {
             out.print(Json.write(CheckView.json(result, extrapolated)) + System.lineSeparator());

@@ -52,11 +52,20 @@ final class CheckPage {
     }
 
     private static String results(CheckRun run, String query) {
+        StringBuilder out = new StringBuilder("<h2>Results at ").append(Html.text(Temperatures.celsius(run.result().temperature())))
+                .append("</h2><p>").append(Html.text(run.model().description())).append("; ").append(Html.text(run.loadLine().describe()))
+                .append(".</p>").append(resultsTable(run));
+        out.append("<figure class=\"chart\"><img src=\"/charts/check.svg?").append(Html.text(query))
+                .append("\" width=\"960\" height=\"560\" alt=\"Operating point on the load line\"><figcaption>B (solid) and J (dashed) ")
+                .append("of the grade at the check's temperature, the load line and a ring at the operating point.</figcaption></figure>");
+        return out.append(Layout.cautions(run.extrapolated())).toString();
+    }
+
+    /** The results of a check as an HTML table, for the page and the report. */
+    static String resultsTable(CheckRun run) {
         DesignCheckResult result = run.result();
         OperatingPoint point = result.point();
-        StringBuilder out = new StringBuilder("<h2>Results at ").append(Html.text(Temperatures.celsius(result.temperature())))
-                .append("</h2><p>").append(Html.text(run.model().description())).append("; ").append(Html.text(run.loadLine().describe()))
-                .append(".</p><table class=\"results\"><tbody>")
+        StringBuilder out = new StringBuilder("<table class=\"results\"><tbody>")
                 .append(row("permeance coefficient Pc", format("%.4g", result.loadLine().pc())))
                 .append(row("opposing field", kiloAmperes(result.loadLine().opposingField())))
                 .append(row("operating point", "H = " + kiloAmperes(point.h()) + ", B = " + tesla(point.b()) + ", J = " + tesla(point.j())))
@@ -68,10 +77,7 @@ final class CheckPage {
         if (run.extrapolated()) {
             out.append(row("extrapolated", "yes: T, T0 or the maximum working temperature lies outside the measured temperatures"));
         }
-        out.append("</tbody></table><figure class=\"chart\"><img src=\"/charts/check.svg?").append(Html.text(query))
-                .append("\" width=\"960\" height=\"560\" alt=\"Operating point on the load line\"><figcaption>B (solid) and J (dashed) ")
-                .append("of the grade at the check's temperature, the load line and a ring at the operating point.</figcaption></figure>");
-        return out.append(Layout.cautions(run.extrapolated())).toString();
+        return out.append("</tbody></table>").toString();
     }
 
     private static String row(String name, String value) {

@@ -1,0 +1,79 @@
+package org.kneepoint.server.web;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.time.Instant;
+import java.util.List;
+import org.kneepoint.fitter.loadline.LoadLine;
+import org.kneepoint.server.chart.CheckChart;
+import org.kneepoint.server.http.DesignRequests.CheckRun;
+import org.kneepoint.server.text.Temperatures;
+
+/**
+ * A design check as one self-contained HTML file for a design review: the inputs, the results, the
+ * operating-point chart (inline SVG), the assumptions, the published source of each method and the
+ * cautions. It needs nothing else to open offline: the style sheet is inlined and there is no script.
+ */
+public final class CheckReport {
+
+    private static final List<String> ASSUMPTIONS = List.of(
+            "The magnet is uniformly magnetized along +z and works in the second quadrant (H ≤ 0, B ≥ 0); B = μ0·H + J.",
+            "Load line B = −μ0·Pc·(H + Ha), Ha the opposing field; for a shape, Pc = (1 − N)/N with the stated demagnetizing factor"
+                    + " (magnetometric Nm unless another was chosen).",
+            "Knee field Hk: where J has fallen to 0.9·Br (IEC 60404-8-1 practice, from memory).",
+            "Irreversible loss by linear recoil: below the knee the magnet recoils along a line of slope μ0·(μrec − 1) in J from the"
+                    + " operating point; Br' = J(Hop) − μ0·(μrec − 1)·Hop; loss = 1 − Br'/Br(T), carried back to T0 by the reversible coefficient.",
+            "A library grade's curve at T comes from its temperature model: knee fits at the measured temperatures, interpolated"
+                    + " between them and extrapolated (flagged) beyond; a typed-in grade follows the linear law of its α and β.",
+            "The single-Pc estimate treats the magnet's internal field as uniform; local field variations near edges and pole faces are not in these numbers.");
+
+    private static final List<String> SOURCES = List.of(
+            "Cylinder demagnetizing factors: D.-X. Chen, J. A. Brug, R. B. Goldfarb, IEEE Trans. Magn. 27(4), 3601–3619 (1991);"
+                    + " the fluxmetric closed form derived from the magnetometric one (Kneepoint).",
+            "Block demagnetizing factors: A. Aharoni, J. Appl. Phys. 83, 3432 (1998).",
+            "Spheroids: J. A. Osborn, Phys. Rev. 67, 351 (1945). Magnetic circuit Pc = (Lm·Ag)/(Am·Lg)·(σ/f): common practice.",
+            "Knee model J(H) = Br + μ0(μrec − 1)H − D·exp(−(H + HcJ)/w) and the operating point in closed form with the Lambert W"
+                    + " function (R. M. Corless et al., Adv. Comput. Math. 5, 329 (1996)).",
+            "Linear temperature law Br(T) = Br0·(1 + α·(T − T0)), HcJ(T) = HcJ0·(1 + β·(T − T0)).");
+
+    private CheckReport() {
+    }
+
+    public static String html(CheckRun run, String inputs, String programVersion) {
+        String temperature = Temperatures.celsius(run.result().temperature());
+        LoadLine line = run.result().loadLine();
+        String chart = CheckChart.svg("Operating point at " + temperature, run.model().model().at(run.result().temperature()), line,
+                run.result().point(), 960, 560);
+        StringBuilder out = new StringBuilder("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>Design check report</title><style>")
+                .append(styleSheet()).append("</style></head><body><main>")
+                .append("<h1>Design check report</h1><p>Made by Kneepoint ").append(Html.text(programVersion)).append(" at ")
+                .append(Html.text(Instant.now().toString())).append(".</p>")
+                .append("<h2>Inputs</h2><p>").append(Html.text(inputs)).append("</p><p>").append(Html.text(run.model().description()))
+                .append("; ").append(Html.text(run.loadLine().describe())).append(".</p>")
+                .append("<h2>Results at ").append(Html.text(temperature)).append("</h2>").append(CheckPage.resultsTable(run))
+                .append("<figure class=\"chart\">").append(chart).append("<figcaption>B (solid) and J (dashed) of the grade at ")
+                .append(Html.text(temperature)).append(", the load line and a ring at the operating point.</figcaption></figure>")
+                .append(list("Assumptions", ASSUMPTIONS)).append(list("Methods and their sources", SOURCES))
+                .append(Layout.cautions(run.extrapolated()))
+                .append("</main></body></html>\n");
+        return out.toString();
+    }
+
+    private static String list(String heading, List<String> items) {
+        StringBuilder out = new StringBuilder("<h2>").append(Html.text(heading)).append("</h2><ul>");
+        for (String item : items) {
+            out.append("<li>").append(Html.text(item)).append("</li>");
+        }
+        return out.append("</ul>").toString();
+    }
+
+    private static String styleSheet() {
+        try (InputStream in = CheckReport.class.getResourceAsStream("/web/kneepoint.css")) {
+            return in == null ? "" : new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}
