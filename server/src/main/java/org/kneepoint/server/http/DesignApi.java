@@ -16,8 +16,8 @@ import org.kneepoint.server.text.FieldView;
 import org.kneepoint.server.text.SelectionView;
 
 /**
- * The design routes: {@code /api/check}, {@code /api/select} and {@code /api/field/{shape}}, answering what
- * {@code kneepoint check}, {@code select} and {@code field} print with {@code --json}.
+ * The design routes: {@code /api/check}, {@code /api/duty}, {@code /api/select} and {@code /api/field/{shape}},
+ * answering what {@code kneepoint check}, {@code duty}, {@code select} and {@code field} print with {@code --json}.
  */
 final class DesignApi {
 
@@ -30,6 +30,11 @@ final class DesignApi {
     void check(Context context) {
         CheckRun run = DesignRequests.check(context, library.reader());
         LibraryApi.json(context, CheckView.json(run.result(), run.extrapolated()));
+    }
+
+    void duty(Context context) {
+        DesignRequests.DutyRun run = DesignRequests.duty(context, library.reader());
+        LibraryApi.json(context, org.kneepoint.server.text.DutyView.json(run.pc(), run.results(), run.extrapolated()));
     }
 
     void select(Context context) {

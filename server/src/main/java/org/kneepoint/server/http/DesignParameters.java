@@ -34,6 +34,17 @@ final class DesignParameters {
         return all.toArray(ApiParameter[]::new);
     }
 
+    static ApiParameter[] duty() {
+        List<ApiParameter> all = new ArrayList<>();
+        for (ApiParameter parameter : check()) {
+            if (!parameter.name().equals("temperature") && !parameter.name().equals("opposingField") && !parameter.name().equals("lossLimit")) {
+                all.add(parameter);
+            }
+        }
+        all.add(ApiParameter.query("steps", true, "the steps TEMPERATURE:OPPOSING_FIELD separated by commas", "20C:0, 150C:300kA/m, 20C:0"));
+        return all.toArray(ApiParameter[]::new);
+    }
+
     static ApiParameter[] select() {
         List<ApiParameter> all = new ArrayList<>();
         loadLine(all);

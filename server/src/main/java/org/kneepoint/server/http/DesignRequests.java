@@ -1,5 +1,9 @@
 package org.kneepoint.server.http;
 
+import org.kneepoint.fitter.loadline.DutySequence;
+import org.kneepoint.fitter.loadline.DutyStep;
+import org.kneepoint.fitter.loadline.DutyStepResult;
+import org.kneepoint.server.library.DutySteps;
 import io.javalin.http.Context;
 import java.util.List;
 import org.kneepoint.db.LibraryReader;
@@ -30,6 +34,10 @@ public final class DesignRequests {
     public record CheckRun(GradeModel model, LoadLineSpec loadLine, DesignCheckResult result, double lossLimit, boolean extrapolated) {
     }
 
+    /** A duty sequence that ran: where its model came from, the load line, its Pc and the result of each step. */
+    public record DutyRun(GradeModel model, LoadLineSpec loadLine, double pc, List<DutyStepResult> results, boolean extrapolated) {
+    }
+
     /** A selection that ran: the requirements, the load line, the order and the ranked rows. */
     public record SelectionRun(Requirements requirements, LoadLineSpec loadLine, RankingOrder order, List<SelectionRow> rows) {
     }
@@ -44,6 +52,18 @@ public final class DesignRequests {
         GradeModel model = model(query, reader);
         DesignCheckResult result = DesignCheck.of(model.model(), new LoadLine(loadLine.permeanceCoefficient(), opposingField), temperature, lossLimit);
         return new CheckRun(model, loadLine, result, lossLimit, model.extrapolated(result));
+    }
+
+    /** The duty sequence the query asks for: {@code grade} or the typed-in grade, the load line, {@code steps}. */
+    public static DutyRun duty(Context context, LibraryReader reader) {
+        Query query = new Query(context);
+        LoadLineSpec loadLine = loadLine(query);
+        List<DutyStep> steps = DutySteps.parse(query.text("steps"));
+        GradeModel model = model(query, reader);
+        double pc = loadLine.permeanceCoefficient();
+        List<DutyStepResult> results = DutySequence.run(model.model(), pc, steps);
+        boolean extrapolated = steps.stream().anyMatch(step -> model.extrapolated().test(step.temperature()));
+        return new DutyRun(model, loadLine, pc, results, extrapolated);
     }
 
     /** The selection the query asks for, over every grade of the library or of {@code family}. */

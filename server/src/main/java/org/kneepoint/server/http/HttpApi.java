@@ -94,6 +94,8 @@ public final class HttpApi {
                         ApiParameter.query("length", true, "polar diameter, along the magnetization", "10mm")),
                 ApiRoute.get("/api/check", "a grade on its load line: operating point, knee margin, losses, maximum temperature",
                         design::check, DesignParameters.check()),
+                ApiRoute.get("/api/duty", "flux and irreversible loss after each (temperature, opposing field) step", design::duty,
+                        DesignParameters.duty()),
                 ApiRoute.get("/api/select", "every grade of the library ranked against the requirements", design::select,
                         DesignParameters.select()),
                 ApiRoute.get("/api/field/cylinder", "flux density B at a point near a cylinder", design::cylinder,
