@@ -35,6 +35,7 @@ final class GradePage {
                 .append("Demagnetization curves of ").append(Html.text(name)).append("\"><figcaption>B (solid) and J (dashed) against H at each ")
                 .append("stored temperature; rings mark the knee, where J has fallen to 0.9·Br.</figcaption></figure>");
         out.append("<h2>Characterization</h2>").append(table(curves, segment));
+        out.append(GradeModelSection.html(name, curves, library.fits()));
         out.append(Layout.caution());
         return Layout.page(name, "Library", out.toString(), demoPresent);
     }
