@@ -3,6 +3,7 @@ package org.kneepoint.server.chart;
 import java.awt.BasicStroke;
 import java.awt.Font;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.text.TextUtils;
 
@@ -33,12 +34,15 @@ final class ChartStyle {
         plot.setDomainZeroBaselineStroke(new BasicStroke(1f));
         plot.setRangeZeroBaselineStroke(new BasicStroke(1f));
         plot.setOutlineVisible(false);
-        for (var axis : new org.jfree.chart.axis.ValueAxis[] {plot.getDomainAxis(), plot.getRangeAxis()}) {
-            axis.setLabelFont(LABEL_FONT);
-            axis.setTickLabelFont(TICK_FONT);
-            axis.setLabelPaint(TemperaturePalette.INK);
-            axis.setTickLabelPaint(TemperaturePalette.INK);
-        }
+        apply(plot.getDomainAxis());
+        apply(plot.getRangeAxis());
+    }
+
+    static void apply(ValueAxis axis) {
+        axis.setLabelFont(LABEL_FONT);
+        axis.setTickLabelFont(TICK_FONT);
+        axis.setLabelPaint(TemperaturePalette.INK);
+        axis.setTickLabelPaint(TemperaturePalette.INK);
     }
 
     static void apply(JFreeChart chart) {

@@ -2,12 +2,6 @@ package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.field.MagnetField;
-import org.kneepoint.fitter.shape.BlockShape;
-import org.kneepoint.fitter.shape.CylinderShape;
-import org.kneepoint.fitter.shape.MagnetShape;
-import org.kneepoint.fitter.shape.RingShape;
-import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.server.http.DesignRequests.CheckRun;
 import org.kneepoint.server.http.DesignRequests.SelectionRun;
 import org.kneepoint.server.library.Position;
@@ -43,24 +37,19 @@ final class DesignApi {
     }
 
     void cylinder(Context context) {
-        Query query = new Query(context);
-        field(context, query, new CylinderShape(query.length("diameter"), query.length("length")));
+        field(context, FieldRequest.of(context, "cylinder"));
     }
 
     void ring(Context context) {
-        Query query = new Query(context);
-        field(context, query, new RingShape(query.length("diameter"), query.length("innerDiameter"), query.length("length")));
+        field(context, FieldRequest.of(context, "ring"));
     }
 
     void block(Context context) {
-        Query query = new Query(context);
-        field(context, query, new BlockShape(query.length("width"), query.length("depth"), query.length("thickness")));
+        field(context, FieldRequest.of(context, "block"));
     }
 
-    private static void field(Context context, Query query, MagnetShape shape) {
-        double br = query.quantity("br", Dimension.FLUX_DENSITY, "1.3T");
-        Position at = query.position("at");
-        MagnetField field = MagnetField.of(shape, br);
-        LibraryApi.json(context, FieldView.json(at.toArray(), field.fluxDensity(at.x(), at.y(), at.z())));
+    private static void field(Context context, FieldRequest request) {
+        Position at = new Query(context).position("at");
+        LibraryApi.json(context, FieldView.json(at.toArray(), request.field().fluxDensity(at.x(), at.y(), at.z())));
     }
 }

@@ -22,7 +22,7 @@ final class Layout {
                 + "<link rel=\"stylesheet\" href=\"/style.css\"></head><body>"
                 + "<header class=\"bar\"><span class=\"mark\">Kneepoint</span><nav>"
                 + tab("/", "Library", section) + tab("/check", "Check", section) + tab("/select", "Select", section)
-                + tab("/import", "Import", section)
+                + tab("/field", "Field", section) + tab("/import", "Import", section)
                 + "</nav></header><main>" + content + "</main>" + footer(demoPresent) + "</body></html>\n";
     }
 

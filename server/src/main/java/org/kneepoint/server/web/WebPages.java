@@ -11,9 +11,11 @@ import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.KneepointException;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.chart.CheckChart;
+import org.kneepoint.server.chart.FieldChart;
 import org.kneepoint.server.chart.GradeChart;
 import org.kneepoint.server.http.DesignRequests;
 import org.kneepoint.server.http.ErrorStatus;
+import org.kneepoint.server.http.FieldRequest;
 import org.kneepoint.server.http.DesignRequests.CheckRun;
 import org.kneepoint.server.http.DesignRequests.SelectionRun;
 import org.kneepoint.server.http.ServerSettings;
@@ -59,6 +61,13 @@ final class WebPages {
             context.contentType("image/svg+xml").result(svg);
         });
         config.routes.get("/select", this::select);
+        config.routes.get("/field", this::field);
+        config.routes.get("/charts/field.svg", context -> {
+            FieldRequest request = FieldRequest.of(context);
+            String svg = FieldChart.svg("Field of a " + request.describe(), request.shape(), request.field(), FieldPage.CHART_WIDTH,
+                    FieldPage.CHART_HEIGHT);
+            context.contentType("image/svg+xml").result(svg);
+        });
         config.routes.get("/import", context -> html(context, ImportPage.form(tokenRequired, demoPresent())));
         config.routes.post("/import", this::checkUpload);
         config.routes.post("/import/commit", this::commit);
@@ -91,6 +100,20 @@ final class WebPages {
             }
         }
         html(context, SelectPage.render(library.reader(), context::queryParam, run, problem, demoPresent()));
+    }
+
+    private void field(Context context) {
+        FieldRequest request = null;
+        String problem = null;
+        if (!context.queryParamMap().isEmpty()) {
+            try {
+                request = FieldRequest.of(context);
+            } catch (KneepointException e) {
+                context.status(ErrorStatus.of(e));
+                problem = e.getMessage();
+            }
+        }
+        html(context, FieldPage.render(context::queryParam, context.queryString(), request, problem, demoPresent()));
     }
 
     private void checkUpload(Context context) {
