@@ -134,4 +134,15 @@ class BrowserTest {
         assertTrue(browser.getPageSource().contains("Rank the grades"));
         screenshot("select");
     }
+
+    @Test
+    void the_field_page_shows_the_map_and_field_lines_of_a_cylinder() throws Exception {
+        open("/field");
+        browser.findElement(By.linkText("Field")).click();
+        open("/field?shape=cylinder&diameter=10mm&length=5mm&br=1.3T");
+        new WebDriverWait(browser, Duration.ofSeconds(15)).until(ExpectedConditions.presenceOfElementLocated(
+                By.cssSelector("img[src*='/charts/field.svg']")));
+        assertTrue(browser.getPageSource().contains("cylinder"), "the magnet is described");
+        screenshot("field");
+    }
 }
