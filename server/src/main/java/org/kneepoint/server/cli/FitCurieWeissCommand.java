@@ -9,6 +9,7 @@ import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.model.curieweiss.CurieWeissFit;
 import org.kneepoint.fitter.model.curieweiss.CurieWeissFitter;
 import org.kneepoint.server.text.CurieWeissFitView;
+import org.kneepoint.server.library.SusceptibilityData;
 import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;

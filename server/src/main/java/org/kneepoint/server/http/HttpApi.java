@@ -63,6 +63,7 @@ public final class HttpApi {
         PermeanceApi permeance = new PermeanceApi();
         DesignApi design = new DesignApi(library);
         MaterialApi materials = new MaterialApi(library);
+        FitApi fits = new FitApi(library);
         ApiParameter name = ApiParameter.path("name", "the grade's name", "DEMO N42SH");
         ApiParameter temperature = ApiParameter.query("temperature", true, "temperature with its unit: C, K or F", "120C");
         ApiParameter onSteel = ApiParameter.query("onSteel", false, "true: one pole face on a large steel plate", "false");
@@ -107,6 +108,13 @@ public final class HttpApi {
                 ApiRoute.get("/api/materials", "the materials with stored susceptibility points", materials::materials),
                 ApiRoute.get("/api/materials/{name}", "one material's stored susceptibility points", materials::material,
                         ApiParameter.path("name", "the material's name", "DEMO copper")),
-                ApiRoute.get("/api/fits", "every stored fit, by time", materials::fits));
+                ApiRoute.get("/api/fits", "every stored fit, by time", materials::fits),
+                ApiRoute.get("/api/fit/knee", "the knee model fitted to a grade's curves (stores nothing)", fits::knee,
+                        ApiParameter.query("grade", true, "a grade of the library", "DEMO NdFeB 42/100"),
+                        ApiParameter.query("temperature", false, "only the curve at this temperature", "20C")),
+                ApiRoute.get("/api/fit/temperature", "a grade's temperature model: α, β and a knee fit per temperature", fits::temperature,
+                        ApiParameter.query("grade", true, "a grade of the library", "DEMO NdFeB 42/100")),
+                ApiRoute.get("/api/fit/curie-weiss", "the Curie–Weiss law fitted to a material's stored susceptibility", fits::curieWeiss,
+                        ApiParameter.query("material", true, "a material of the library", "DEMO paramagnetic salt")));
     }
 }

@@ -1,4 +1,4 @@
-package org.kneepoint.server.cli;
+package org.kneepoint.server.library;
 
 import java.nio.file.Path;
 import java.util.List;
@@ -24,15 +24,15 @@ import org.kneepoint.importer.csv.SusceptibilityTable;
  * @param temperatureK kelvin
  * @param chiVolume    SI volume susceptibility, one per temperature
  */
-record SusceptibilityData(String source, String material, SusceptibilityForm form, double[] temperatureK,
+public record SusceptibilityData(String source, String material, SusceptibilityForm form, double[] temperatureK,
         double[] chiVolume) {
 
-    SusceptibilityData {
+    public SusceptibilityData {
         temperatureK = temperatureK.clone();
         chiVolume = chiVolume.clone();
     }
 
-    static SusceptibilityData fromFile(Path file) {
+    public static SusceptibilityData fromFile(Path file) {
         SusceptibilityTable table = new SusceptibilityFileReader(ReadLimits.defaults()).read(file);
         List<double[]> points = table.points();
         double[] t = new double[points.size()];
@@ -44,7 +44,7 @@ record SusceptibilityData(String source, String material, SusceptibilityForm for
         return new SusceptibilityData(table.source(), table.material(), table.form(), t, chi);
     }
 
-    static SusceptibilityData fromLibrary(LibraryReader reader, String material) {
+    public static SusceptibilityData fromLibrary(LibraryReader reader, String material) {
         List<SusceptibilityPoint> points = reader.susceptibility(material);
         String where = "material " + material;
         double[] t = new double[points.size()];
