@@ -10,6 +10,7 @@ import java.io.IOException;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CountDownLatch;
@@ -46,7 +47,8 @@ class JobsTest {
             HttpResponse<String> page = server.get("/jobs/" + id);
             assertEquals(200, page.statusCode());
             assertFalse(page.body().contains("http-equiv=\"refresh\""));
-            for (String label : new String[] {"Ms", "α", "Standard error", "rms error in B"}) {
+            for (String label : new String[] {"Ms", "α", "Standard error", "rms error in B", "href=\"/grades/Invented%20soft%20iron\"",
+                    String.format(Locale.ROOT, "%.4g", expected.get("ms").asDouble() / 1000)}) {
                 assertTrue(page.body().contains(label), label);
             }
             String grade = server.get("/grades/Invented%20soft%20iron").body();
@@ -86,8 +88,11 @@ class JobsTest {
             assertTrue(jobs.submit(progress -> Map.of()).isEmpty());
             HttpResponse<String> refused = post(server, "/api/jobs/ja-fit?grade=DEMO%20NdFeB%2042%2F100&temperature=20C&magnetizingField=3MA/m");
             assertEquals(429, refused.statusCode(), refused.body());
-            String page = server.get("/jobs/" + queued.get()).body();
-            assertTrue(page.contains("<meta http-equiv=\"refresh\" content=\"1\">"), page);
+            String waiting = server.get("/jobs/" + queued.get()).body();
+            assertTrue(waiting.contains("<meta http-equiv=\"refresh\" content=\"1\">"), waiting);
+            String runningPage = waitUntilReported(server, running.get());
+            assertTrue(runningPage.contains("<meta http-equiv=\"refresh\" content=\"1\">"), runningPage);
+            assertTrue(runningPage.contains("Running: 50 %, global search"), runningPage);
             release.countDown();
             assertEquals("done", waitUntilEnded(server, running.get()).get("state").asText());
             assertTrue(waitUntilEnded(server, running.get()).get("result").get("finished").asBoolean());
@@ -108,6 +113,18 @@ class JobsTest {
             String state = status.get("state").asText();
             if (!state.equals("queued") && !state.equals("running") || System.nanoTime() > deadline) {
                 return status;
+            }
+            Thread.sleep(100);
+        }
+    }
+
+    /** The job's page once the job has reported progress, polled for at most 60 s. */
+    private static String waitUntilReported(RunningServer server, String id) throws Exception {
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (true) {
+            String page = server.get("/jobs/" + id).body();
+            if (page.contains("global search") || System.nanoTime() > deadline) {
+                return page;
             }
             Thread.sleep(100);
         }

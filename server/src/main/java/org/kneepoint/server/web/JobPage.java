@@ -1,5 +1,6 @@
 package org.kneepoint.server.web;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import org.kneepoint.server.http.JobStatus;
@@ -12,8 +13,8 @@ import org.kneepoint.server.http.JobStatus;
  */
 final class JobPage {
 
-    private static final String[][] ROWS = {
-        {"ms", "Ms", "kA/m", "1000"}, {"a", "a", "A/m", "1"}, {"k", "k", "A/m", "1"}, {"c", "c", "", "1"}, {"alpha", "α", "", "1"}};
+    private static final List<Row> ROWS = List.of(new Row("ms", "Ms", "kA/m", 1000), new Row("a", "a", "A/m", 1),
+            new Row("k", "k", "A/m", 1), new Row("c", "c", "", 1), new Row("alpha", "α", "", 1));
 
     private JobPage() {
     }
@@ -32,22 +33,25 @@ final class JobPage {
         if (status.pending()) {
             out.append("<p class=\"hint\">This page reloads itself every second; it can be left and bookmarked, the fit goes on.</p>");
         }
-        String page = Layout.page("Jiles–Atherton fit", "Library", out.toString(), demoPresent);
-        return status.pending() ? page.replace("<head>", "<head><meta http-equiv=\"refresh\" content=\"1\">") : page;
+        return Layout.page("Jiles–Atherton fit", "Library", out.toString(), demoPresent, status.pending());
     }
 
     private static String result(Map<String, Object> result) {
         Map<?, ?> errors = (Map<?, ?>) result.get("standardErrors");
-        StringBuilder out = new StringBuilder("<p>").append(Html.text(String.valueOf(result.get("source"))))
+        String grade = String.valueOf(result.get("grade"));
+        StringBuilder out = new StringBuilder("<p>").append(Html.link("/grades/" + Html.pathSegment(grade), grade))
                 .append(": fit to the ").append(Html.text(String.valueOf(result.get("curveKind")))).append(" curve</p>")
                 .append("<table class=\"numbers\"><thead><tr><th>Parameter</th><th>Value</th><th>Standard error</th><th>Unit</th></tr></thead><tbody>");
-        for (String[] row : ROWS) {
-            double scale = Double.parseDouble(row[3]);
-            out.append("<tr><th scope=\"row\">").append(row[1]).append("</th>").append(cell(result.get(row[0]), scale))
-                    .append(cell(errors.get(row[0]), scale)).append("<td>").append(row[2]).append("</td></tr>");
+        for (Row row : ROWS) {
+            out.append("<tr><th scope=\"row\">").append(row.label()).append("</th>").append(cell(result.get(row.key()), row.scale()))
+                    .append(cell(errors.get(row.key()), row.scale())).append("<td>").append(row.unit()).append("</td></tr>");
         }
         out.append("<tr><th scope=\"row\">rms error in B</th>").append(cell(result.get("rmsB"), 1)).append("<td></td><td>T</td></tr>");
         return out.append("</tbody></table>").toString();
+    }
+
+    /** One parameter's row: its key in the result, its label, the unit it is shown in and that unit's size in SI. */
+    private record Row(String key, String label, String unit, double scale) {
     }
 
     private static String cell(Object value, double scale) {
