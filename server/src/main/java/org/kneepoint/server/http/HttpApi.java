@@ -107,7 +107,7 @@ public final class HttpApi {
                 ApiRoute.get("/api/materials/{name}", "one material's stored susceptibility points", materials::material,
                         ApiParameter.path("name", "the material's name", "DEMO copper")),
                 ApiRoute.get("/api/fits", "every stored fit, by time", materials::fits),
-                ApiRoute.post("/api/jobs/ja-fit", "start a Jiles–Atherton fit of a grade's stored loop in the background",
+                ApiRoute.start("/api/jobs/ja-fit", "start a Jiles–Atherton fit of a grade's stored loop in the background",
                         jobApi::jilesAthertonFit, ApiParameter.query("grade", true, "the grade's name", "Invented soft iron"),
                         ApiParameter.query("temperature", false, "which curve, when there are several", "20C"),
                         ApiParameter.query("magnetizingField", false, "field magnetized at, for a second-quadrant curve", "3MA/m")),
