@@ -10,11 +10,13 @@ import java.io.IOException;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.fitter.model.ja.FitStage;
@@ -78,7 +80,7 @@ class JobsTest {
     @Test
     void a_full_queue_refuses_and_a_waiting_job_page_reloads_itself() throws Exception {
         CountDownLatch release = new CountDownLatch(1);
-        JobRegistry jobs = new JobRegistry(1, 1, 10);
+        JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
         try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
             Optional<String> running = jobs.submit(progress -> {
                 progress.report(0.5, FitStage.GLOBAL_SEARCH);
@@ -100,6 +102,31 @@ class JobsTest {
             assertTrue(waitUntilEnded(server, running.get()).get("result").get("finished").asBoolean());
         } finally {
             release.countDown();
+        }
+    }
+
+    @Test
+    void finished_jobs_are_forgotten_after_their_time_and_beyond_the_count() throws Exception {
+        AtomicLong clock = new AtomicLong();
+        try (JobRegistry jobs = new JobRegistry(1, 2, 2, Duration.ofMinutes(10), clock::get)) {
+            String first = jobs.submit(progress -> Map.of()).orElseThrow();
+            String second = jobs.submit(progress -> Map.of()).orElseThrow();
+            waitUntilDone(jobs, first);
+            waitUntilDone(jobs, second);
+            clock.set(Duration.ofMinutes(5).toNanos());
+            String third = jobs.submit(progress -> Map.of()).orElseThrow();
+            assertTrue(jobs.status(first).isEmpty(), "the oldest finished job makes room for a new one");
+            assertTrue(jobs.status(second).isPresent());
+            waitUntilDone(jobs, third);
+            clock.set(Duration.ofMinutes(12).toNanos());
+            assertTrue(jobs.status(second).isEmpty() && jobs.status(third).isPresent(), "kept ten minutes after it finished");
+        }
+    }
+
+    private static void waitUntilDone(JobRegistry jobs, String id) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (jobs.status(id).orElseThrow().pending() && System.nanoTime() < deadline) {
+            Thread.sleep(20);
         }
     }
 
