@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
 import java.util.Map;
@@ -68,6 +69,17 @@ class HttpWriteTokenTest {
                 "Authorization", "Bearer " + TOKEN);
         assertEquals(200, response.statusCode(), response.body());
         assertEquals("valid", RunningServer.json(response).get("files").get(0).get("status").asText());
+    }
+
+    @Test
+    void starting_a_job_needs_the_token() throws Exception {
+        String start = "/api/jobs/ja-fit?grade=No%20such%20grade";
+        HttpResponse<String> without = server.post(start, HttpRequest.BodyPublishers.noBody(), "application/x-www-form-urlencoded");
+        assertEquals(401, without.statusCode());
+        assertEquals("TOKEN_REQUIRED", code(without));
+        HttpResponse<String> with = server.post(start, HttpRequest.BodyPublishers.noBody(), "application/x-www-form-urlencoded",
+                "Authorization", "Bearer " + TOKEN);
+        assertEquals(404, with.statusCode(), with.body());
     }
 
     @Test

@@ -14,6 +14,7 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.kneepoint.db.DatabaseLocation;
 import org.kneepoint.db.Library;
+import org.kneepoint.server.http.JobRegistry;
 import org.kneepoint.server.http.ServerSettings;
 import org.kneepoint.server.library.DemoLoader;
 import org.kneepoint.server.web.WebApplication;
@@ -33,6 +34,13 @@ final class RunningServer implements AutoCloseable {
     private RunningServer(Library library, WebApplication application) {
         this.library = library;
         this.application = application;
+    }
+
+    /** The demo library in {@code folder}, served without a token, with the given job registry. */
+    static RunningServer withJobs(Path folder, JobRegistry jobs) {
+        Library library = Library.open(DatabaseLocation.ofFolder(folder.resolve("library")));
+        DemoLoader.load(library);
+        return new RunningServer(library, WebApplication.start(library, new ServerSettings(ServerSettings.LOOPBACK, 0, null), jobs));
     }
 
     /** A server over the demo library in {@code folder}; {@code token} null means no token. */

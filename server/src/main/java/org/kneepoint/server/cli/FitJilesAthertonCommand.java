@@ -1,19 +1,17 @@
 package org.kneepoint.server.cli;
 
 import java.nio.file.Path;
-import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.model.ja.FitProgress;
 import org.kneepoint.fitter.model.ja.JilesAthertonFit;
-import org.kneepoint.fitter.model.ja.JilesAthertonFitter;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityFormatter;
 import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
+import org.kneepoint.server.library.JilesAthertonFitData;
+import org.kneepoint.server.library.JilesAthertonFitRun;
 import org.kneepoint.server.text.JilesAthertonFitView;
 import org.kneepoint.server.text.Json;
 import org.kneepoint.server.text.ProgressBar;
@@ -91,25 +89,13 @@ final class FitJilesAthertonCommand implements Callable<Integer> {
     private JilesAthertonFit fit(JilesAthertonFitData data) {
         FitProgress progress = json || System.console() == null ? FitProgress.ignore()
                 : new ProgressBar(spec.commandLine().getErr(), System::nanoTime, "fit ja");
-        JilesAthertonFitter fitter = new JilesAthertonFitter();
-        try {
-            return data.isLoop() ? fitter.fitLoop(data.loop(), progress) : fitter.fitSecondQuadrant(data.loop(), progress);
-        } catch (BadInputException e) {
-            throw e.location().isPresent() ? e : new BadInputException(InputLocation.of(data.source()), e.getMessage());
-        }
+        return JilesAthertonFitRun.fit(data, progress);
     }
 
     private void print(JilesAthertonFitData data, JilesAthertonFit fit) {
         var out = spec.commandLine().getOut();
         if (json) {
-            Map<String, Object> document = JilesAthertonFitView.json(fit);
-            document.put("source", data.source());
-            document.put("grade", data.grade());
-            document.put("curveKind", data.curve().kind().name().toLowerCase());
-            document.put("temperatureK", data.curve().temperatureK());
-            document.put("magnetizingField", data.magnetizingField());
-            document.put("saved", save);
-            out.println(Json.write(document));
+            out.println(Json.write(JilesAthertonFitRun.json(data, fit, save)));
         } else {
             String title = data.source() + ": Jiles–Atherton fit to the " + (data.isLoop() ? "loop" : "second-quadrant curve")
                     + (data.magnetizingField() == null ? "" : " after magnetizing at " + QuantityFormatter.format(data.magnetizingField(), KILO_AMPERE, 5))

@@ -6,9 +6,11 @@ import java.util.List;
 /**
  * One JSON route of the API: its method and path (Javalin's {@code {name}} path parameters), what
  * it does, its parameters and its handler. The routes are registered and described in the OpenAPI
- * document from the same list, so the two cannot drift apart.
+ * document from the same list, so the two cannot drift apart. {@code status} is the status of
+ * success; {@code upload} says the body is multipart files.
  */
-record ApiRoute(String method, String path, String summary, List<ApiParameter> parameters, Handler handler) {
+record ApiRoute(String method, String path, String summary, List<ApiParameter> parameters, Handler handler, int status,
+        boolean upload) {
 
     ApiRoute {
         parameters = List.copyOf(parameters);
@@ -18,11 +20,16 @@ record ApiRoute(String method, String path, String summary, List<ApiParameter> p
     }
 
     static ApiRoute get(String path, String summary, Handler handler, ApiParameter... parameters) {
-        return new ApiRoute("get", path, summary, List.of(parameters), handler);
+        return new ApiRoute("get", path, summary, List.of(parameters), handler, 200, false);
     }
 
     static ApiRoute post(String path, String summary, Handler handler, ApiParameter... parameters) {
-        return new ApiRoute("post", path, summary, List.of(parameters), handler);
+        return new ApiRoute("post", path, summary, List.of(parameters), handler, 200, true);
+    }
+
+    /** A POST without a body that starts a background job and answers 202 Accepted. */
+    static ApiRoute start(String path, String summary, Handler handler, ApiParameter... parameters) {
+        return new ApiRoute("post", path, summary, List.of(parameters), handler, 202, false);
     }
 
     /** A path or query parameter, with an example value. */

@@ -21,7 +21,7 @@ public final class HttpApi {
     }
 
     /** Installs the guards, the error mapper (with the page it shows browsers) and the API routes into a Javalin configuration. */
-    public static void install(JavalinConfig config, Library library, ServerSettings settings, ErrorPage errorPage) {
+    public static void install(JavalinConfig config, Library library, JobRegistry jobs, ServerSettings settings, ErrorPage errorPage) {
         config.http.maxRequestSize = ServerSettings.MAX_OTHER_BYTES;
         config.jetty.multipartConfig.maxTotalRequestSize(ServerSettings.MAX_UPLOAD_BYTES, SizeUnit.BYTES);
         config.jetty.multipartConfig.maxFileSize(ServerSettings.MAX_UPLOAD_BYTES, SizeUnit.BYTES);
@@ -32,7 +32,7 @@ public final class HttpApi {
             guard.check(context);
         });
         AtomicReference<String> document = new AtomicReference<>();
-        List<ApiRoute> routes = new ArrayList<>(routes(library));
+        List<ApiRoute> routes = new ArrayList<>(routes(library, jobs));
         routes.add(ApiRoute.get("/api/openapi.json", "this document: the OpenAPI 3 description of the API",
                 context -> context.contentType("application/json").result(document.get())));
         document.set(Json.write(OpenApiDocument.of(routes, VersionInfo.version())));
@@ -57,13 +57,14 @@ public final class HttpApi {
         }
     }
 
-    static List<ApiRoute> routes(Library library) {
+    static List<ApiRoute> routes(Library library, JobRegistry jobs) {
         LibraryApi grades = new LibraryApi(library);
         ImportApi imports = new ImportApi(library);
         PermeanceApi permeance = new PermeanceApi();
         DesignApi design = new DesignApi(library);
         MaterialApi materials = new MaterialApi(library);
         FitApi fits = new FitApi(library);
+        JobApi jobApi = new JobApi(library, jobs);
         ApiParameter name = ApiParameter.path("name", "the grade's name", "DEMO N42SH");
         ApiParameter temperature = ApiParameter.query("temperature", true, "temperature with its unit: C, K or F", "120C");
         ApiParameter onSteel = ApiParameter.query("onSteel", false, "true: one pole face on a large steel plate", "false");
@@ -115,6 +116,12 @@ public final class HttpApi {
                 ApiRoute.get("/api/fit/temperature", "a grade's temperature model: α, β and a knee fit per temperature", fits::temperature,
                         ApiParameter.query("grade", true, "a grade of the library", "DEMO NdFeB 42/100")),
                 ApiRoute.get("/api/fit/curie-weiss", "the Curie–Weiss law fitted to a material's stored susceptibility", fits::curieWeiss,
-                        ApiParameter.query("material", true, "a material of the library", "DEMO paramagnetic salt")));
+                        ApiParameter.query("material", true, "a material of the library", "DEMO paramagnetic salt")),
+                ApiRoute.start("/api/jobs/ja-fit", "start a Jiles–Atherton fit of a grade's stored loop in the background",
+                        jobApi::jilesAthertonFit, ApiParameter.query("grade", true, "the grade's name", "Invented soft iron"),
+                        ApiParameter.query("temperature", false, "which curve, when there are several", "20C"),
+                        ApiParameter.query("magnetizingField", false, "field magnetized at, for a second-quadrant curve", "3MA/m")),
+                ApiRoute.get("/api/jobs/{id}", "a background job: state, fraction done, stage, result or error", jobApi::job,
+                        ApiParameter.path("id", "the job's id, as answered when it was started", "0123456789abcdef0123456789abcdef")));
     }
 }

@@ -48,16 +48,18 @@ final class OpenApiDocument {
             parameters.add(p);
         }
         operation.put("parameters", parameters);
-        if (route.method().equals("post")) {
+        if (route.upload()) {
             operation.put("requestBody", Map.of("required", true, "content", Map.of("multipart/form-data",
                     Map.of("schema", Map.of("type", "object", "properties", Map.of("file",
                             Map.of("type", "array", "items", Map.of("type", "string", "format", "binary"))))))));
+        }
+        if (route.method().equals("post")) {
             operation.put("security", List.of(Map.of("token", List.of())));
         }
         Map<String, Object> error = Map.of("description", "an error",
                 "content", Map.of("application/json", Map.of("schema", Map.of("$ref", "#/components/schemas/Error"))));
         Map<String, Object> responses = new LinkedHashMap<>();
-        responses.put("200", Map.of("description", "success", "content", Map.of("application/json", Map.of())));
+        responses.put(String.valueOf(route.status()), Map.of("description", "success", "content", Map.of("application/json", Map.of())));
         responses.put("4XX", error);
         responses.put("500", error);
         operation.put("responses", responses);

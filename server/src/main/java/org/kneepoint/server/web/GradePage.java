@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.kneepoint.db.LibraryReader;
 import org.kneepoint.fitter.curve.Characterization;
 import org.kneepoint.fitter.curve.CurveCharacterizer;
+import org.kneepoint.fitter.curve.CurveKind;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.server.library.GradeCurves;
@@ -21,7 +22,7 @@ final class GradePage {
     private GradePage() {
     }
 
-    static String render(LibraryReader library, String name, boolean demoPresent) {
+    static String render(LibraryReader library, String name, boolean tokenRequired, boolean demoPresent) {
         List<LibraryCurve> curves = GradeCurves.stored(library, name).stream()
                 .sorted(Comparator.comparing((LibraryCurve curve) -> curve.curve().temperatureK())).toList();
         GradeInfo info = library.grade(name).orElseThrow();
@@ -34,7 +35,7 @@ final class GradePage {
         out.append("<figure class=\"chart\"><img src=\"/charts/grades/").append(segment).append(".svg\" width=\"960\" height=\"560\" alt=\"")
                 .append("Demagnetization curves of ").append(Html.text(name)).append("\"><figcaption>B (solid) and J (dashed) against H at each ")
                 .append("stored temperature; rings mark the knee, where J has fallen to 0.9·Br.</figcaption></figure>");
-        out.append("<h2>Characterization</h2>").append(table(curves, segment));
+        out.append("<h2>Characterization</h2>").append(table(curves, segment)).append(fitForms(curves, segment, tokenRequired));
         out.append(GradeModelSection.html(name, curves, library.fits()));
         out.append(Layout.caution());
         return Layout.page(name, "Library", out.toString(), demoPresent);
@@ -59,6 +60,23 @@ final class GradePage {
                     .append("<a href=\"").append(base).append("&amp;format=json\">JSON</a></td></tr>");
         }
         return out.append("</tbody></table><p class=\"hint\">— means the curve does not reach that point.</p>").toString();
+    }
+
+    /** One form per stored loop curve that starts a Jiles–Atherton fit and leads to its job page. */
+    private static String fitForms(List<LibraryCurve> curves, String segment, boolean tokenRequired) {
+        StringBuilder out = new StringBuilder();
+        for (LibraryCurve stored : curves) {
+            if (stored.curve().kind() != CurveKind.LOOP) {
+                continue;
+            }
+            double kelvin = stored.curve().temperatureK();
+            out.append("<form class=\"fit\" method=\"post\" action=\"/jobs/ja-fit?grade=").append(segment).append("&amp;temperature=")
+                    .append(Html.pathSegment(String.format(Locale.ROOT, "%.2fK", kelvin))).append("\">")
+                    .append(tokenRequired ? "<label>Access token <input type=\"password\" name=\"token\" autocomplete=\"off\" required></label> " : "")
+                    .append("<button type=\"submit\">Fit Jiles–Atherton to the loop at ").append(Html.text(Temperatures.celsius(kelvin)))
+                    .append("</button></form>");
+        }
+        return out.isEmpty() ? "" : "<h2>Jiles–Atherton model</h2>" + out;
     }
 
     private static String fact(String label, String value) {

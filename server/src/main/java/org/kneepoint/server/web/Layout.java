@@ -16,7 +16,13 @@ final class Layout {
 
     /** A whole page; {@code title} is escaped here, {@code content} is markup built by the pages. */
     static String page(String title, String section, String content, boolean demoPresent) {
+        return page(title, section, content, demoPresent, false);
+    }
+
+    /** A whole page that, when {@code reloading}, asks the browser to load it again every second. */
+    static String page(String title, String section, String content, boolean demoPresent, boolean reloading) {
         return "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\">"
+                + (reloading ? "<meta http-equiv=\"refresh\" content=\"1\">" : "")
                 + "<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">"
                 + "<title>" + Html.text(title) + " · Kneepoint</title>"
                 + "<link rel=\"stylesheet\" href=\"/style.css\"></head><body>"

@@ -8,6 +8,7 @@ import java.util.List;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.server.http.HttpApi;
+import org.kneepoint.server.http.JobRegistry;
 import org.kneepoint.server.http.ServerSettings;
 
 /**
@@ -20,33 +21,41 @@ public final class WebApplication implements AutoCloseable {
     private final Javalin server;
     private final ImportStaging staging;
     private final List<String> routes;
+    private final JobRegistry jobs;
 
-    private WebApplication(Javalin server, ImportStaging staging, List<String> routes) {
+    private WebApplication(Javalin server, ImportStaging staging, List<String> routes, JobRegistry jobs) {
         this.server = server;
         this.staging = staging;
         this.routes = routes;
+        this.jobs = jobs;
     }
 
-    /** Starts listening; an address or port that cannot be used is bad input. */
+    /** Starts listening with the standard job registry; an address or port that cannot be used is bad input. */
     public static WebApplication start(Library library, ServerSettings settings) {
+        return start(library, settings, JobRegistry.standard());
+    }
+
+    /** Starts listening; the application owns {@code jobs} from now on and closes it with itself. */
+    public static WebApplication start(Library library, ServerSettings settings, JobRegistry jobs) {
         ImportStaging staging = new ImportStaging();
         List<String> routes = Collections.synchronizedList(new ArrayList<>());
-        WebPages pages = new WebPages(library, settings, staging);
+        WebPages pages = new WebPages(library, settings, staging, jobs);
         Javalin server = Javalin.create(config -> {
             config.startup.showJavalinBanner = false;
             config.startup.showOldJavalinVersionWarning = false;
             config.events.handlerAdded(info -> routes.add(info.getHttpMethod().name() + " " + info.getPath()));
-            HttpApi.install(config, library, settings, pages::error);
+            HttpApi.install(config, library, jobs, settings, pages::error);
             pages.install(config);
         });
         try {
             server.start(settings.bind(), settings.port());
         } catch (JavalinBindException e) {
             staging.close();
+            jobs.close();
             throw new BadInputException("cannot listen on " + settings.bind() + " port " + settings.port()
                     + " (in use, or not an address of this machine); choose another --port, or --port 0 for any free one");
         }
-        return new WebApplication(server, staging, routes);
+        return new WebApplication(server, staging, routes, jobs);
     }
 
     /** The port the server listens on (the real one when 0 was asked for). */
@@ -65,5 +74,6 @@ public final class WebApplication implements AutoCloseable {
     public void close() {
         server.stop();
         staging.close();
+        jobs.close();
     }
 }

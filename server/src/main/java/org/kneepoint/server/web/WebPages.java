@@ -2,6 +2,7 @@ package org.kneepoint.server.web;
 
 import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
+import io.javalin.http.HttpStatus;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -9,6 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.List;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.KneepointException;
+import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.chart.CheckChart;
 import org.kneepoint.server.chart.FieldChart;
@@ -16,6 +18,9 @@ import org.kneepoint.server.chart.GradeChart;
 import org.kneepoint.server.http.DesignRequests;
 import org.kneepoint.server.http.ErrorStatus;
 import org.kneepoint.server.http.FieldRequest;
+import org.kneepoint.server.http.JobRegistry;
+import org.kneepoint.server.http.JobRequests;
+import org.kneepoint.server.http.JobStatus;
 import org.kneepoint.server.http.DesignRequests.CheckRun;
 import org.kneepoint.server.http.DesignRequests.SelectionRun;
 import org.kneepoint.server.http.ServerSettings;
@@ -35,9 +40,11 @@ final class WebPages {
     private final boolean tokenRequired;
     private final ImportStaging staging;
     private final String styleSheet;
+    private final JobRegistry jobs;
 
-    WebPages(Library library, ServerSettings settings, ImportStaging staging) {
+    WebPages(Library library, ServerSettings settings, ImportStaging staging, JobRegistry jobs) {
         this.library = library;
+        this.jobs = jobs;
         this.tokenRequired = settings.tokenRequired();
         this.staging = staging;
         this.styleSheet = resource("/web/kneepoint.css");
@@ -46,7 +53,7 @@ final class WebPages {
     void install(JavalinConfig config) {
         config.routes.get("/", context -> html(context, LibraryPage.render(library.reader(), blankToNull(context.queryParam("family")),
                 context.queryParam("sort"), context.queryParam("order"))));
-        config.routes.get("/grades/{name}", context -> html(context, GradePage.render(library.reader(), context.pathParam("name"), demoPresent())));
+        config.routes.get("/grades/{name}", context -> html(context, GradePage.render(library.reader(), context.pathParam("name"), tokenRequired, demoPresent())));
         config.routes.get("/charts/grades/{name}.svg", context -> {
             String name = context.pathParam("name");
             String svg = GradeChart.svg(name, GradeCurves.stored(library.reader(), name), CHART_WIDTH, CHART_HEIGHT);
@@ -71,6 +78,14 @@ final class WebPages {
         config.routes.get("/import", context -> html(context, ImportPage.form(tokenRequired, demoPresent())));
         config.routes.post("/import", this::checkUpload);
         config.routes.post("/import/commit", this::commit);
+        config.routes.post("/jobs/ja-fit", context -> context.redirect("/jobs/" + JobRequests.jilesAthertonFit(context, library, jobs),
+                HttpStatus.SEE_OTHER));
+        config.routes.get("/jobs/{id}", context -> {
+            String id = context.pathParam("id");
+            JobStatus status = jobs.status(id).orElseThrow(() -> new NotFoundException("no job with id '" + id
+                    + "' (jobs are kept for a while only)"));
+            html(context, JobPage.render(status, demoPresent()));
+        });
         config.routes.get("/style.css", context -> context.contentType("text/css; charset=utf-8").result(styleSheet));
     }
 

@@ -1,4 +1,4 @@
-package org.kneepoint.server.cli;
+package org.kneepoint.server.library;
 
 import java.nio.file.Path;
 import java.util.Arrays;
@@ -28,20 +28,20 @@ import org.kneepoint.importer.csv.ReadLimits;
  * @param magnetizingField field visited before the first point, A/m, or null
  * @param loop             the data as the fitter takes them
  */
-record JilesAthertonFitData(String source, String grade, DemagnetizationCurve curve, Double magnetizingField,
+public record JilesAthertonFitData(String source, String grade, DemagnetizationCurve curve, Double magnetizingField,
         MeasuredLoop loop) {
 
-    boolean isLoop() {
+    public boolean isLoop() {
         return curve.kind() == CurveKind.LOOP;
     }
 
-    static JilesAthertonFitData fromFile(Path file, Double temperatureK, Double magnetizingField) {
+    public static JilesAthertonFitData fromFile(Path file, Double temperatureK, Double magnetizingField) {
         CurveFile read = new CurveFileReader(ReadLimits.defaults()).read(file);
         DemagnetizationCurve curve = CurveChoice.choose(read.curves(), temperatureK, read.source());
         return of(read.source(), read.metadata().grade(), curve, magnetizingField);
     }
 
-    static JilesAthertonFitData fromGrade(LibraryReader reader, String grade, Double temperatureK, Double magnetizingField) {
+    public static JilesAthertonFitData fromGrade(LibraryReader reader, String grade, Double temperatureK, Double magnetizingField) {
         List<DemagnetizationCurve> stored = reader.curves(grade).stream().map(LibraryCurve::curve).toList();
         List<DemagnetizationCurve> loops = stored.stream().filter(c -> c.kind() == CurveKind.LOOP).toList();
         String where = "grade " + grade;

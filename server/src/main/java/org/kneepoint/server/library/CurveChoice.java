@@ -1,4 +1,4 @@
-package org.kneepoint.server.cli;
+package org.kneepoint.server.library;
 
 import java.util.List;
 import java.util.stream.Collectors;

@@ -1,0 +1,40 @@
+package org.kneepoint.server.http;
+
+import io.javalin.http.Context;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.error.NotFoundException;
+
+/** {@code POST /api/jobs/ja-fit} starts a fit in the background; {@code GET /api/jobs/{id}} tells how it is going. */
+final class JobApi {
+
+    private final Library library;
+    private final JobRegistry jobs;
+
+    JobApi(Library library, JobRegistry jobs) {
+        this.library = library;
+        this.jobs = jobs;
+    }
+
+    void jilesAthertonFit(Context context) {
+        String id = JobRequests.jilesAthertonFit(context, library, jobs);
+        context.status(202).header("Location", "/api/jobs/" + id);
+        LibraryApi.json(context, Map.of("id", id, "status", "/api/jobs/" + id));
+    }
+
+    void job(Context context) {
+        String id = context.pathParam("id");
+        JobStatus status = jobs.status(id).orElseThrow(() -> new NotFoundException("no job with id '" + id + "' (jobs are kept for a while only)"));
+        Map<String, Object> body = new LinkedHashMap<>();
+        body.put("state", status.state().name().toLowerCase());
+        body.put("fraction", status.fraction());
+        body.put("stage", status.stage());
+        if (status.state() == JobStatus.State.DONE) {
+            body.put("result", status.result());
+        } else if (status.state() == JobStatus.State.FAILED) {
+            body.put("error", status.error());
+        }
+        LibraryApi.json(context, body);
+    }
+}

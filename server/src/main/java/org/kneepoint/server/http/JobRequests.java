@@ -1,0 +1,32 @@
+package org.kneepoint.server.http;
+
+import io.javalin.http.Context;
+import org.kneepoint.db.Library;
+import org.kneepoint.fitter.error.NotFoundException;
+import org.kneepoint.fitter.units.Dimension;
+import org.kneepoint.server.library.JilesAthertonFitData;
+import org.kneepoint.server.library.JilesAthertonFitRun;
+
+/**
+ * Starts jobs from a request's query, for the API and the pages alike. The data are read and
+ * checked before the job is queued, so a bad request is refused at once and starts nothing.
+ */
+public final class JobRequests {
+
+    private JobRequests() {
+    }
+
+    /** Queues a Jiles–Atherton fit of {@code grade}'s stored loop (or second-quadrant curve) and answers the job's id. */
+    public static String jilesAthertonFit(Context context, Library library, JobRegistry jobs) {
+        Query query = new Query(context);
+        String grade = query.required("grade", "Invented soft iron");
+        Double temperatureK = query.optionalTemperatureK("temperature");
+        Double magnetizingField = query.optionalQuantity("magnetizingField", Dimension.FIELD_STRENGTH, "3MA/m");
+        if (library.reader().grade(grade).isEmpty()) {
+            throw new NotFoundException("no grade named '" + grade + "' in the library");
+        }
+        JilesAthertonFitData data = JilesAthertonFitData.fromGrade(library.reader(), grade, temperatureK, magnetizingField);
+        return jobs.submit(progress -> JilesAthertonFitRun.json(data, JilesAthertonFitRun.fit(data, progress), false))
+                .orElseThrow(() -> new RequestRefused(429, "BUSY", "the server is busy with other jobs; try again in a while"));
+    }
+}

@@ -1,0 +1,169 @@
+package org.kneepoint.tests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicLong;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.kneepoint.fitter.model.ja.FitStage;
+import org.kneepoint.server.http.JobRegistry;
+
+/** Background jobs: a Jiles–Atherton fit started over HTTP, its status, its page, and the bounds of the queue. */
+class JobsTest {
+
+    private static final String GRADE = "Invented soft iron";
+    private static final String QUERY = "?grade=Invented%20soft%20iron&temperature=20C";
+
+    @TempDir
+    Path folder;
+
+    @Test
+    void a_fit_job_ends_with_the_answer_of_fit_ja_and_its_page_shows_the_table() throws Exception {
+        String db = folder.resolve("library").toString();
+        assertEquals(0, CliRun.of("import", Path.of("..", "examples", "invented-soft-iron-loop.csv").toString(), "--db", db).exitCode());
+        CliRun cli = CliRun.of("fit", "ja", GRADE, "--temperature", "20C", "--json", "--db", db);
+        assertEquals(0, cli.exitCode(), cli.err());
+        JsonNode expected = new ObjectMapper().readTree(cli.out());
+        try (RunningServer server = RunningServer.withJobs(folder, JobRegistry.standard())) {
+            HttpResponse<String> started = post(server, "/api/jobs/ja-fit" + QUERY);
+            assertEquals(202, started.statusCode(), started.body());
+            String id = RunningServer.json(started).get("id").asText();
+            assertEquals("/api/jobs/" + id, RunningServer.json(started).get("status").asText());
+            JsonNode operation = RunningServer.json(server.get("/api/openapi.json")).get("paths").get("/api/jobs/ja-fit").get("post");
+            assertTrue(operation.get("responses").has("202") && !operation.has("requestBody"), operation.toString());
+            JsonNode status = waitUntilEnded(server, id);
+            assertEquals("done", status.get("state").asText(), status.toString());
+            assertEquals(expected, status.get("result"));
+            HttpResponse<String> page = server.get("/jobs/" + id);
+            assertEquals(200, page.statusCode());
+            assertFalse(page.body().contains("http-equiv=\"refresh\""));
+            for (String label : new String[] {"Ms", "α", "Standard error", "rms error in B", "href=\"/grades/Invented%20soft%20iron\"",
+                    String.format(Locale.ROOT, "%.4g", expected.get("ms").asDouble() / 1000)}) {
+                assertTrue(page.body().contains(label), label);
+            }
+            String grade = server.get("/grades/Invented%20soft%20iron").body();
+            assertTrue(grade.contains("action=\"/jobs/ja-fit?grade=Invented%20soft%20iron&amp;temperature=293.15K\""), grade);
+            HttpResponse<String> fromForm = post(server, "/jobs/ja-fit" + QUERY);
+            assertEquals(303, fromForm.statusCode());
+            assertTrue(fromForm.headers().firstValue("Location").orElseThrow().startsWith("/jobs/"));
+        }
+    }
+
+    @Test
+    void unknown_jobs_are_not_found_and_bad_requests_start_nothing() throws Exception {
+        try (RunningServer server = RunningServer.withDemo(folder, null)) {
+            assertEquals(404, server.get("/api/jobs/0123456789abcdef0123456789abcdef").statusCode());
+            assertEquals(404, server.get("/jobs/0123456789abcdef0123456789abcdef").statusCode());
+            HttpResponse<String> unknown = post(server, "/api/jobs/ja-fit?grade=No%20such%20grade");
+            assertEquals(404, unknown.statusCode(), unknown.body());
+            HttpResponse<String> noLoop = post(server, "/api/jobs/ja-fit?grade=DEMO%20NdFeB%2042%2F100");
+            assertEquals(400, noLoop.statusCode(), noLoop.body());
+            assertTrue(RunningServer.json(noLoop).get("error").get("message").asText().contains("has no stored loop curve"));
+            assertEquals(400, post(server, "/api/jobs/ja-fit").statusCode());
+        }
+    }
+
+    @Test
+    void a_full_queue_refuses_and_a_waiting_job_page_reloads_itself() throws Exception {
+        CountDownLatch release = new CountDownLatch(1);
+        JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
+        try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
+            Optional<String> running = jobs.submit(progress -> {
+                progress.report(0.5, FitStage.GLOBAL_SEARCH);
+                awaitQuietly(release);
+                return Map.of("finished", true);
+            });
+            Optional<String> queued = jobs.submit(progress -> Map.of());
+            assertTrue(running.isPresent() && queued.isPresent());
+            assertTrue(jobs.submit(progress -> Map.of()).isEmpty());
+            HttpResponse<String> refused = post(server, "/api/jobs/ja-fit?grade=DEMO%20NdFeB%2042%2F100&temperature=20C&magnetizingField=3MA/m");
+            assertEquals(429, refused.statusCode(), refused.body());
+            String waiting = server.get("/jobs/" + queued.get()).body();
+            assertTrue(waiting.contains("<meta http-equiv=\"refresh\" content=\"1\">"), waiting);
+            String runningPage = waitUntilReported(server, running.get());
+            assertTrue(runningPage.contains("<meta http-equiv=\"refresh\" content=\"1\">"), runningPage);
+            assertTrue(runningPage.contains("Running: 50 %, global search"), runningPage);
+            release.countDown();
+            assertEquals("done", waitUntilEnded(server, running.get()).get("state").asText());
+            assertTrue(waitUntilEnded(server, running.get()).get("result").get("finished").asBoolean());
+        } finally {
+            release.countDown();
+        }
+    }
+
+    @Test
+    void finished_jobs_are_forgotten_after_their_time_and_beyond_the_count() throws Exception {
+        AtomicLong clock = new AtomicLong();
+        try (JobRegistry jobs = new JobRegistry(1, 2, 2, Duration.ofMinutes(10), clock::get)) {
+            String first = jobs.submit(progress -> Map.of()).orElseThrow();
+            String second = jobs.submit(progress -> Map.of()).orElseThrow();
+            waitUntilDone(jobs, first);
+            waitUntilDone(jobs, second);
+            clock.set(Duration.ofMinutes(5).toNanos());
+            String third = jobs.submit(progress -> Map.of()).orElseThrow();
+            assertTrue(jobs.status(first).isEmpty(), "the oldest finished job makes room for a new one");
+            assertTrue(jobs.status(second).isPresent());
+            waitUntilDone(jobs, third);
+            clock.set(Duration.ofMinutes(12).toNanos());
+            assertTrue(jobs.status(second).isEmpty() && jobs.status(third).isPresent(), "kept ten minutes after it finished");
+        }
+    }
+
+    private static void waitUntilDone(JobRegistry jobs, String id) throws InterruptedException {
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (jobs.status(id).orElseThrow().pending() && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
+    }
+
+    private static HttpResponse<String> post(RunningServer server, String pathAndQuery) throws IOException, InterruptedException {
+        return server.post(pathAndQuery, HttpRequest.BodyPublishers.noBody(), "application/x-www-form-urlencoded");
+    }
+
+    /** Polls the job's status until it has ended, for at most 60 s. */
+    private static JsonNode waitUntilEnded(RunningServer server, String id) throws Exception {
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (true) {
+            JsonNode status = RunningServer.json(server.get("/api/jobs/" + id));
+            String state = status.get("state").asText();
+            if (!state.equals("queued") && !state.equals("running") || System.nanoTime() > deadline) {
+                return status;
+            }
+            Thread.sleep(100);
+        }
+    }
+
+    /** The job's page once the job has reported progress, polled for at most 60 s. */
+    private static String waitUntilReported(RunningServer server, String id) throws Exception {
+        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
+        while (true) {
+            String page = server.get("/jobs/" + id).body();
+            if (page.contains("global search") || System.nanoTime() > deadline) {
+                return page;
+            }
+            Thread.sleep(100);
+        }
+    }
+
+    private static void awaitQuietly(CountDownLatch latch) {
+        try {
+            latch.await(60, TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+}
