@@ -46,4 +46,13 @@ class PlotCommandTest {
         assertFalse(Files.exists(folder.resolve("x.svg")));
         assertFalse(Files.exists(target));
     }
+
+    @Test
+    void a_grade_with_only_a_loop_is_drawn_as_its_whole_loop() throws Exception {
+        String db = folder.resolve("library").toString();
+        assertEquals(0, CliRun.of("import", Path.of("..", "examples", "invented-soft-iron-loop.csv").toString(), "--db", db).exitCode());
+        Path svg = folder.resolve("loop.svg");
+        assertEquals(0, CliRun.of("plot", "Invented soft iron", "-o", svg.toString(), "--db", db).exitCode());
+        assertTrue(Files.readString(svg).contains("B loop at 20 °C"), "the loop is in the legend");
+    }
 }

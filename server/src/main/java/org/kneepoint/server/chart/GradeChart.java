@@ -38,7 +38,10 @@ public final class GradeChart {
     private GradeChart() {
     }
 
-    /** The chart of these curves (loops are left out) as an SVG document of the given size in pixels. */
+    /**
+     * The chart of these curves as an SVG document of the given size in pixels: the second quadrant of the normal and
+     * intrinsic curves, or, for a grade that has only loops, the whole loops.
+     */
     public static String svg(String grade, List<LibraryCurve> curves, int width, int height) {
         SVGGraphics2D graphics = new SVGGraphics2D(width, height);
         chart(grade, curves).draw(graphics, new Rectangle(0, 0, width, height));
@@ -82,11 +85,21 @@ public final class GradeChart {
             renderer.setSeriesPaint(index, TemperaturePalette.INK);
             renderer.setSeriesStroke(index, SOLID);
         }
+        List<DemagnetizationCurve> loops = curves.stream().map(LibraryCurve::curve).filter(c -> c.kind() == CurveKind.LOOP)
+                .sorted(Comparator.comparing(DemagnetizationCurve::temperatureK)).toList();
+        if (usable.isEmpty()) {
+            for (DemagnetizationCurve loop : loops) {
+                add(data, renderer, series("B loop at " + Temperatures.celsius(loop.temperatureK()), loop.h(), loop.b()),
+                        TemperaturePalette.colour(colourIndex++), SOLID);
+            }
+        }
         NumberAxis field = new NumberAxis("field strength H (kA/m)");
         NumberAxis flux = new NumberAxis("flux density B, polarization J (T)");
         field.setAutoRangeIncludesZero(true);
-        double top = top(usable);
-        flux.setRange(-0.05 * top, 1.08 * top);
+        if (!usable.isEmpty()) {
+            double top = top(usable);
+            flux.setRange(-0.05 * top, 1.08 * top);
+        }
         XYPlot plot = new XYPlot(data, field, flux, renderer);
         ChartStyle.apply(plot);
         JFreeChart chart = new JFreeChart(grade, ChartStyle.TITLE_FONT, plot, true);
