@@ -199,9 +199,10 @@ class WebPagesTest {
         assertTrue(chart.headers().firstValue("Content-Type").orElse("").startsWith("image/svg+xml"));
         String svg = chart.body();
         assertTrue(svg.contains("field strength H (kA/m)") && svg.contains("flux density B, polarization J (T)"));
-        assertTrue(svg.contains("B (normal curve)") && svg.contains("J (intrinsic curve)"));
+        assertTrue(svg.contains("B at ") && svg.contains("J at "), "B and J curves per temperature in the legend");
         assertTrue(svg.contains("load line, Pc = 2.00") && svg.contains("operating point"));
         assertTrue(svg.contains("Operating point at 80 °C"));
+        assertTrue(svg.contains("B at 80 °C") && svg.contains("B at 20 °C"), "the check's temperature and the reference temperature");
     }
 
     @Test

@@ -1,6 +1,7 @@
 package org.kneepoint.server.chart;
 
 import java.awt.BasicStroke;
+import java.util.List;
 import java.awt.Rectangle;
 import java.awt.geom.Ellipse2D;
 import org.jfree.chart.JFreeChart;
@@ -13,8 +14,10 @@ import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
 import org.kneepoint.fitter.loadline.IntrinsicCurve;
 import org.kneepoint.fitter.loadline.LoadLine;
+import org.kneepoint.fitter.loadline.TemperatureModel;
 import org.kneepoint.fitter.loadline.OperatingPoint;
 import org.kneepoint.fitter.units.MagneticConstant;
+import org.kneepoint.server.text.Temperatures;
 
 /**
  * The operating-point chart of a design check: the grade's B(H) (solid) and J(H) (dashed) at the check's
@@ -32,39 +35,57 @@ public final class CheckChart {
     private CheckChart() {
     }
 
-    /** The chart of {@code curve} with the load line and its operating point, {@code title} above it, as SVG. */
-    public static String svg(String title, IntrinsicCurve curve, LoadLine line, OperatingPoint point, int width, int height) {
-        double lowest = 1.1 * Math.min(coercivity(curve), point.h());
-        XYSeries b = new XYSeries("B (normal curve)", false, true);
-        XYSeries j = new XYSeries("J (intrinsic curve)", false, true);
-        XYSeries load = new XYSeries("load line, Pc = " + String.format(java.util.Locale.ROOT, "%.3g", line.pc()), false, true);
-        for (int i = 0; i <= SAMPLES; i++) {
-            double h = lowest * i / SAMPLES;
-            double polarization = curve.j(h);
-            b.add(h / KILO, MagneticConstant.MU0 * h + polarization);
-            j.add(h / KILO, polarization);
-            double onLine = line.fluxDensityAt(h);
-            if (onLine >= 0 && onLine <= 1.05 * curve.remanence()) {
-                load.add(h / KILO, onLine);
-            }
+    /**
+     * The grade's B and J curves at each of {@code temperatures} (one colour each), the load line, and a ring at the
+     * operating point on each curve, {@code title} above it, as SVG.
+     */
+    public static String svg(String title, TemperatureModel model, List<Double> temperatures, LoadLine line, int width, int height) {
+        List<IntrinsicCurve> curves = temperatures.stream().map(model::at).toList();
+        double lowest = 0;
+        double top = 0;
+        for (IntrinsicCurve curve : curves) {
+            lowest = Math.min(lowest, 1.1 * Math.min(coercivity(curve), line.on(curve).h()));
+            top = Math.max(top, curve.remanence());
         }
-        XYSeries operating = new XYSeries("operating point", false, true);
-        operating.add(point.h() / KILO, point.b());
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         renderer.setDrawSeriesLineAsPath(true);
-        add(data, renderer, b, SOLID, 0);
-        add(data, renderer, j, DASHED, 0);
-        add(data, renderer, load, SOLID, 3);
-        add(data, renderer, operating, SOLID, 5);
-        renderer.setSeriesLinesVisible(3, false);
-        renderer.setSeriesShapesVisible(3, true);
-        renderer.setSeriesShape(3, new Ellipse2D.Double(-6, -6, 12, 12));
-        renderer.setSeriesShapesFilled(3, false);
-        renderer.setSeriesPaint(3, TemperaturePalette.INK);
+        XYSeries operating = new XYSeries("operating points", false, true);
+        for (int c = 0; c < curves.size(); c++) {
+            IntrinsicCurve curve = curves.get(c);
+            String at = Temperatures.celsius(temperatures.get(c));
+            XYSeries b = new XYSeries("B at " + at, false, true);
+            XYSeries j = new XYSeries("J at " + at, false, true);
+            for (int i = 0; i <= SAMPLES; i++) {
+                double h = lowest * i / SAMPLES;
+                double polarization = curve.j(h);
+                b.add(h / KILO, MagneticConstant.MU0 * h + polarization);
+                j.add(h / KILO, polarization);
+            }
+            add(data, renderer, b, SOLID, c);
+            add(data, renderer, j, DASHED, c);
+            OperatingPoint point = line.on(curve);
+            operating.add(point.h() / KILO, point.b());
+        }
+        XYSeries load = new XYSeries("load line, Pc = " + String.format(java.util.Locale.ROOT, "%.3g", line.pc()), false, true);
+        for (int i = 0; i <= SAMPLES; i++) {
+            double h = lowest * i / SAMPLES;
+            double onLine = line.fluxDensityAt(h);
+            if (onLine >= 0 && onLine <= 1.05 * top) {
+                load.add(h / KILO, onLine);
+            }
+        }
+        add(data, renderer, load, SOLID, 5);
+        add(data, renderer, operating, SOLID, 0);
+        int rings = data.getSeriesCount() - 1;
+        renderer.setSeriesLinesVisible(rings, false);
+        renderer.setSeriesShapesVisible(rings, true);
+        renderer.setSeriesShape(rings, new Ellipse2D.Double(-6, -6, 12, 12));
+        renderer.setSeriesShapesFilled(rings, false);
+        renderer.setSeriesPaint(rings, TemperaturePalette.INK);
         NumberAxis field = new NumberAxis("field strength H (kA/m)");
         NumberAxis flux = new NumberAxis("flux density B, polarization J (T)");
-        flux.setRange(-0.05 * curve.remanence(), 1.1 * curve.remanence());
+        flux.setRange(-0.05 * top, 1.1 * top);
         XYPlot plot = new XYPlot(data, field, flux, renderer);
         ChartStyle.apply(plot);
         JFreeChart chart = new JFreeChart(title, ChartStyle.TITLE_FONT, plot, true);
@@ -73,6 +94,19 @@ public final class CheckChart {
         SVGGraphics2D graphics = new SVGGraphics2D(width, height);
         chart.draw(graphics, new Rectangle(0, 0, width, height));
         return graphics.getSVGDocument();
+    }
+
+    /** The temperatures a check's chart shows: the reference, the check's own and the maximum working one, where the model reaches. */
+    public static List<Double> temperaturesOf(TemperatureModel model, double checked, Double maximum) {
+        java.util.TreeSet<Double> temperatures = new java.util.TreeSet<>();
+        temperatures.add(checked);
+        for (Double candidate : new Double[] {model.referenceTemperature(), maximum}) {
+            if (candidate != null && candidate >= model.lowestTemperature() && candidate <= model.highestTemperature()
+                    && temperatures.stream().allMatch(t -> Math.abs(t - candidate) > 0.5)) {
+                temperatures.add(candidate);
+            }
+        }
+        return List.copyOf(temperatures);
     }
 
     /** The (negative) field where J reaches zero, found by widening then halving the bracket. */

@@ -44,8 +44,8 @@ public final class CheckReport {
     public static String html(CheckRun run, String inputs, String programVersion) {
         String temperature = Temperatures.celsius(run.result().temperature());
         LoadLine line = run.result().loadLine();
-        String chart = CheckChart.svg("Operating point at " + temperature, run.model().model().at(run.result().temperature()), line,
-                run.result().point(), 960, 560);
+        String chart = CheckChart.svg("Operating point at " + temperature, run.model().model(), CheckChart.temperaturesOf(
+                run.model().model(), run.result().temperature(), run.result().maxWorkingTemperature()), line, 960, 560);
         StringBuilder out = new StringBuilder("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>Design check report</title><style>")
                 .append(styleSheet()).append("</style></head><body><main>")
                 .append("<h1>Design check report</h1><p>Made by Kneepoint ").append(Html.text(programVersion)).append(" at ")

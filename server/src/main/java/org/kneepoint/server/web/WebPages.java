@@ -63,8 +63,8 @@ final class WebPages {
         config.routes.get("/charts/check.svg", context -> {
             CheckRun run = DesignRequests.check(context, library.reader());
             String title = "Operating point at " + Temperatures.celsius(run.result().temperature());
-            String svg = CheckChart.svg(title, run.model().model().at(run.result().temperature()), run.result().loadLine(),
-                    run.result().point(), CHART_WIDTH, CHART_HEIGHT);
+            String svg = CheckChart.svg(title, run.model().model(), CheckChart.temperaturesOf(run.model().model(),
+                    run.result().temperature(), run.result().maxWorkingTemperature()), run.result().loadLine(), CHART_WIDTH, CHART_HEIGHT);
             context.contentType("image/svg+xml").result(svg);
         });
         config.routes.get("/select", this::select);
