@@ -1,5 +1,6 @@
 package org.kneepoint.fitter.model.curieweiss;
 
+import org.kneepoint.fitter.model.MatrixCopy;
 import java.util.Arrays;
 import java.util.Objects;
 
@@ -26,20 +27,12 @@ public record CurieWeissFit(CurieWeissParameters parameters, double curieConstan
         boolean curieWeissSignificant, int evaluations) {
 
     public CurieWeissFit {
-        correlation = copy(correlation);
+        correlation = MatrixCopy.of(correlation);
     }
 
     @Override
     public double[][] correlation() {
-        return copy(correlation);
-    }
-
-    private static double[][] copy(double[][] matrix) {
-        double[][] result = new double[matrix.length][];
-        for (int i = 0; i < matrix.length; i++) {
-            result[i] = matrix[i].clone();
-        }
-        return result;
+        return MatrixCopy.of(correlation);
     }
 
     @Override

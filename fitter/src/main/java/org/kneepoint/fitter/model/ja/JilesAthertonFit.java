@@ -1,5 +1,6 @@
 package org.kneepoint.fitter.model.ja;
 
+import org.kneepoint.fitter.model.MatrixCopy;
 import java.util.Arrays;
 import java.util.Objects;
 
@@ -22,20 +23,12 @@ public record JilesAthertonFit(JilesAthertonParameters parameters, JilesAtherton
         double fieldMin, double fieldMax) {
 
     public JilesAthertonFit {
-        correlation = copy(correlation);
+        correlation = MatrixCopy.of(correlation);
     }
 
     @Override
     public double[][] correlation() {
-        return copy(correlation);
-    }
-
-    private static double[][] copy(double[][] matrix) {
-        double[][] result = new double[matrix.length][];
-        for (int i = 0; i < matrix.length; i++) {
-            result[i] = matrix[i].clone();
-        }
-        return result;
+        return MatrixCopy.of(correlation);
     }
 
     @Override

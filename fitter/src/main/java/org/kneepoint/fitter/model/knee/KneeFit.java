@@ -1,6 +1,7 @@
 package org.kneepoint.fitter.model.knee;
 
 import org.kneepoint.fitter.loadline.LinearRecoilKnee;
+import org.kneepoint.fitter.model.MatrixCopy;
 
 /**
  * A knee-model fit and what it is worth: the model, standard errors of its four parameters (from
@@ -25,7 +26,7 @@ public record KneeFit(LinearRecoilKnee model, double[] errors, double[][] correl
 
     public KneeFit {
         errors = errors.clone();
-        correlation = java.util.Arrays.stream(correlation).map(double[]::clone).toArray(double[][]::new);
+        correlation = MatrixCopy.of(correlation);
     }
 
     /** A fit whose RMS residual exceeds this share of Br follows the curve only approximately. */
@@ -46,6 +47,6 @@ public record KneeFit(LinearRecoilKnee model, double[] errors, double[][] correl
 
     @Override
     public double[][] correlation() {
-        return java.util.Arrays.stream(correlation).map(double[]::clone).toArray(double[][]::new);
+        return MatrixCopy.of(correlation);
     }
 }
