@@ -1,75 +1,110 @@
 package org.kneepoint.db;
 
-import javax.sql.DataSource;
+import com.zaxxer.hikari.HikariConfig;
+import com.zaxxer.hikari.HikariDataSource;
+import com.zaxxer.hikari.pool.HikariPool;
+import java.util.concurrent.locks.ReentrantLock;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import org.flywaydb.core.Flyway;
 import org.flywaydb.core.api.FlywayException;
-import org.h2.jdbcx.JdbcConnectionPool;
 import org.jooq.DSLContext;
 import org.jooq.conf.RenderQuotedNames;
 import org.jooq.conf.Settings;
 import org.jooq.impl.DSL;
+import org.jooq.impl.DefaultConfiguration;
 import org.kneepoint.fitter.error.BadInputException;
-import org.postgresql.ds.PGSimpleDataSource;
+import org.kneepoint.fitter.error.UnavailableException;
 
 /**
- * An open material library: a migrated database and the stores over it. Opening runs the Flyway
- * migrations, so a new folder or an empty PostgreSQL database becomes a library on first use.
+ * An open material library: a migrated database, its connection pool (HikariCP, for the embedded
+ * H2 file and a shared PostgreSQL server alike) and the stores over it. Opening runs the Flyway
+ * migrations, so a new folder or an empty PostgreSQL database becomes a library on first use. A
+ * lost server connection is replaced by the pool, so the library recovers by itself when the
+ * server comes back.
  */
 public final class Library implements AutoCloseable {
 
     /** The schema version this build migrates to: the number of its newest migration script. */
-    public static final int SCHEMA_VERSION = 1;
+    public static final int SCHEMA_VERSION = 3;
+
+    /** Connections of one library (one process): enough for the web server's request threads. */
+    private static final int POOL_SIZE = 8;
+    /** How long a request waits for a connection before it is told the database is unavailable. */
+    private static final long CONNECTION_TIMEOUT_MS = 5_000;
 
     /** Flyway's own log (java.util.logging when no slf4j binding is present); failures are reported by us instead. */
-    private static final java.util.logging.Logger FLYWAY_LOG = java.util.logging.Logger.getLogger("org.flywaydb");
+    private static final Logger FLYWAY_LOG = Logger.getLogger("org.flywaydb");
     /** jOOQ's start-up notes, likewise. */
-    private static final java.util.logging.Logger JOOQ_LOG = java.util.logging.Logger.getLogger("org.jooq");
+    private static final Logger JOOQ_LOG = Logger.getLogger("org.jooq");
 
     private final DatabaseLocation location;
-    private final JdbcConnectionPool pool;
+    private final HikariDataSource pool;
     private final DSLContext dsl;
+    private final ConnectionFailures failures;
     private final int schemaVersion;
-    private final java.util.concurrent.locks.ReentrantLock writeTurn = new java.util.concurrent.locks.ReentrantLock();
+    private final ReentrantLock writeTurn = new ReentrantLock();
 
-    private Library(DatabaseLocation location, DataSource dataSource, JdbcConnectionPool pool) {
+    private Library(DatabaseLocation location, HikariDataSource pool) {
         this.location = location;
         this.pool = pool;
-        this.schemaVersion = migrate(location, dataSource);
+        this.failures = new ConnectionFailures(location);
+        this.schemaVersion = migrate(location, pool);
         Settings settings = new Settings()
                 .withRenderQuotedNames(RenderQuotedNames.EXPLICIT_DEFAULT_UNQUOTED)
                 .withExecuteLogging(false);
-        this.dsl = DSL.using(dataSource, location.dialect(), settings);
+        this.dsl = DSL.using(new DefaultConfiguration().set(failures.provider(pool)).set(location.dialect())
+                .set(settings).set(failures));
     }
 
     /** Opens (and if needed creates and migrates) the library at the location. */
     public static Library open(DatabaseLocation location) {
         System.setProperty("org.jooq.no-logo", "true");
         System.setProperty("org.jooq.no-tips", "true");
-        if (location.dialect() == org.jooq.SQLDialect.POSTGRES) {
-            PGSimpleDataSource postgres = new PGSimpleDataSource();
-            postgres.setURL(location.jdbcUrl());
-            return new Library(location, postgres, null);
-        }
-        JdbcConnectionPool pool = JdbcConnectionPool.create(location.jdbcUrl(), "sa", "");
+        HikariDataSource pool = connect(location);
         try {
-            return new Library(location, pool, pool);
+            return new Library(location, pool);
         } catch (RuntimeException e) {
-            pool.dispose();
+            pool.close();
             throw e;
         }
     }
 
-    private static int migrate(DatabaseLocation location, DataSource dataSource) {
-        FLYWAY_LOG.setLevel(java.util.logging.Level.OFF);
-        JOOQ_LOG.setLevel(java.util.logging.Level.WARNING);
+    private static HikariDataSource connect(DatabaseLocation location) {
+        HikariConfig config = new HikariConfig();
+        config.setPoolName("kneepoint-library");
+        config.setJdbcUrl(location.jdbcUrl());
+        boolean h2 = location.dialect() == org.jooq.SQLDialect.H2;
+        config.setUsername(location.user() != null ? location.user() : h2 ? "sa" : null);
+        config.setPassword(location.password() != null ? location.password() : h2 ? "" : null);
+        config.setMaximumPoolSize(POOL_SIZE);
+        config.setMinimumIdle(1);
+        config.setConnectionTimeout(CONNECTION_TIMEOUT_MS);
+        try {
+            return new HikariDataSource(config);
+        } catch (HikariPool.PoolInitializationException e) {
+            throw openingFailure(location, e);
+        }
+    }
+
+    private static int migrate(DatabaseLocation location, HikariDataSource dataSource) {
+        FLYWAY_LOG.setLevel(Level.OFF);
+        JOOQ_LOG.setLevel(Level.WARNING);
         try {
             Flyway flyway = Flyway.configure().dataSource(dataSource).locations("classpath:db/migration").load();
             flyway.migrate();
             var current = flyway.info().current();
             return current == null ? 0 : Integer.parseInt(current.getVersion().getVersion());
         } catch (FlywayException e) {
-            throw new BadInputException("cannot open the library at " + location.describe() + ": " + firstLine(e));
+            throw openingFailure(location, e);
         }
+    }
+
+    /** An unreachable server as such; anything else (a broken URL, a foreign schema) as bad input. */
+    private static RuntimeException openingFailure(DatabaseLocation location, RuntimeException failure) {
+        RuntimeException translated = new ConnectionFailures(location).translate(failure);
+        return translated instanceof UnavailableException ? translated
+                : new BadInputException("cannot open the library at " + location.describe() + ": " + firstLine(failure));
     }
 
     private static String firstLine(Throwable error) {
@@ -96,13 +131,11 @@ public final class Library implements AutoCloseable {
     }
 
     public LibraryWriter writer() {
-        return new LibraryWriter(dsl, writeTurn);
+        return new LibraryWriter(dsl, writeTurn, failures);
     }
 
     @Override
     public void close() {
-        if (pool != null) {
-            pool.dispose();
-        }
+        pool.close();
     }
 }

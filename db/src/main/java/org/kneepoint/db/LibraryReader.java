@@ -1,6 +1,7 @@
 package org.kneepoint.db;
 
 import static org.kneepoint.db.jooq.Tables.CURVE;
+import static org.kneepoint.db.jooq.Tables.CURVE_PIECE;
 import static org.kneepoint.db.jooq.Tables.FIT;
 import static org.kneepoint.db.jooq.Tables.GRADE;
 import static org.kneepoint.db.jooq.Tables.IMPORT_RECORD;
@@ -27,6 +28,7 @@ import org.kneepoint.fitter.library.GradeSummary;
 import org.kneepoint.fitter.library.ImportInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.fitter.library.LibrarySnapshot;
+import org.kneepoint.fitter.library.StoredGrade;
 import org.kneepoint.fitter.library.SusceptibilityPoint;
 import org.kneepoint.fitter.units.SusceptibilityForm;
 
@@ -53,11 +55,11 @@ public final class LibraryReader {
                     curveCounts.merge(row.value1(), 1, Integer::sum);
                 });
         List<GradeSummary> grades = new ArrayList<>();
-        dsl.select(GRADE.ID, GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER).from(GRADE)
+        dsl.select(GRADE.ID, GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER, GRADE.PRICE).from(GRADE)
                 .join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
                 .where(filter).orderBy(GRADE.NAME)
                 .forEach(row -> grades.add(new GradeSummary(row.value2(), row.value3(), row.value4(),
-                        temperatures.getOrDefault(row.value1(), List.of()), curveCounts.getOrDefault(row.value1(), 0))));
+                        temperatures.getOrDefault(row.value1(), List.of()), curveCounts.getOrDefault(row.value1(), 0), row.value5())));
         return grades;
     }
 
@@ -67,14 +69,21 @@ public final class LibraryReader {
     }
 
     public Optional<GradeInfo> grade(String name) {
+        return storedGrade(name).map(StoredGrade::grade);
+    }
+
+    /** The grade with the row version an edit of it must name. */
+    public Optional<StoredGrade> storedGrade(String name) {
         return gradeRows(GRADE.NAME.eq(name)).stream().findFirst();
     }
 
-    private List<GradeInfo> gradeRows(Condition condition) {
-        return dsl.select(GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER, GRADE.DENSITY, GRADE.NOTES, GRADE.PROVENANCE)
+    private List<StoredGrade> gradeRows(Condition condition) {
+        return dsl.select(GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER, GRADE.DENSITY, GRADE.NOTES, GRADE.PROVENANCE,
+                        GRADE.PRICE, GRADE.ROW_VERSION)
                 .from(GRADE).join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
                 .where(condition).orderBy(GRADE.NAME)
-                .fetch(row -> new GradeInfo(row.value1(), row.value2(), row.value3(), row.value4(), row.value5(), row.value6()));
+                .fetch(row -> new StoredGrade(new GradeInfo(row.value1(), row.value2(), row.value3(), row.value4(), row.value5(),
+                        row.value6(), row.value7()), row.value8()));
     }
 
     /** The curves of a grade, by temperature and kind, with their points in stored order. */
@@ -83,17 +92,77 @@ public final class LibraryReader {
     }
 
     private List<LibraryCurve> curveRows(Condition condition) {
-        return dsl.select(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.QUANTITY, CURVE.SOURCE, CURVE.POINT_COUNT,
-                        CURVE.H_VALUES, CURVE.MEASURED_VALUES, IMPORT_RECORD.SHA256)
+        List<CurveRow> rows = dsl.select(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.QUANTITY, CURVE.SOURCE, CURVE.POINT_COUNT,
+                        CURVE.H_VALUES, CURVE.MEASURED_VALUES, IMPORT_RECORD.SHA256, CURVE.ID)
                 .from(CURVE).join(GRADE).on(CURVE.GRADE_ID.eq(GRADE.ID))
                 .leftJoin(IMPORT_RECORD).on(CURVE.IMPORT_ID.eq(IMPORT_RECORD.ID))
                 .where(condition).orderBy(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.ID)
                 .fetch(row -> {
-                    CurveKind kind = CurveKind.valueOf(row.value3().toUpperCase(Locale.ROOT));
-                    DemagnetizationCurve curve = new DemagnetizationCurve(kind, Quantity.valueOf(row.value4()),
-                            PackedDoubles.unpack(row.value7(), row.value6()), PackedDoubles.unpack(row.value8(), row.value6()), row.value2());
-                    return new LibraryCurve(row.value1(), curve, row.value5(), row.value9());
+                    CurveRow curve = new CurveRow(row.value10(), row.value1(), row.value2(),
+                            CurveKind.valueOf(row.value3().toUpperCase(Locale.ROOT)), Quantity.valueOf(row.value4()), row.value5(),
+                            row.value9(), row.value6());
+                    curve.append(row.value7(), row.value8());
+                    return curve;
                 });
+        Map<Long, CurveRow> unfinished = new LinkedHashMap<>();
+        rows.stream().filter(row -> !row.complete()).forEach(row -> unfinished.put(row.id(), row));
+        if (!unfinished.isEmpty()) {
+            dsl.select(CURVE_PIECE.CURVE_ID, CURVE_PIECE.H_VALUES, CURVE_PIECE.MEASURED_VALUES).from(CURVE_PIECE)
+                    .where(CURVE_PIECE.CURVE_ID.in(unfinished.keySet())).orderBy(CURVE_PIECE.CURVE_ID, CURVE_PIECE.PIECE)
+                    .forEach(piece -> unfinished.get(piece.value1()).append(piece.value2(), piece.value3()));
+        }
+        return rows.stream().map(CurveRow::curve).toList();
+    }
+
+    /** A curve being read: its row, then its pieces, appended in order until all points are there. */
+    private static final class CurveRow {
+
+        private final long id;
+        private final String grade;
+        private final double temperatureK;
+        private final CurveKind kind;
+        private final Quantity quantity;
+        private final String source;
+        private final String importSha256;
+        private final double[] h;
+        private final double[] values;
+        private int filled;
+
+        CurveRow(long id, String grade, double temperatureK, CurveKind kind, Quantity quantity, String source, String importSha256,
+                int points) {
+            this.id = id;
+            this.grade = grade;
+            this.temperatureK = temperatureK;
+            this.kind = kind;
+            this.quantity = quantity;
+            this.source = source;
+            this.importSha256 = importSha256;
+            this.h = new double[points];
+            this.values = new double[points];
+        }
+
+        long id() {
+            return id;
+        }
+
+        void append(byte[] hBytes, byte[] valueBytes) {
+            int end = PackedDoubles.unpackInto(hBytes, h, filled);
+            if (PackedDoubles.unpackInto(valueBytes, values, filled) != end) {
+                throw new IllegalStateException("a stored curve holds different numbers of H and measured values");
+            }
+            filled = end;
+        }
+
+        boolean complete() {
+            return filled == h.length;
+        }
+
+        LibraryCurve curve() {
+            if (!complete()) {
+                throw new IllegalStateException("a stored curve of " + h.length + " points has only " + filled);
+            }
+            return new LibraryCurve(grade, new DemagnetizationCurve(kind, quantity, h, values, temperatureK), source, importSha256);
+        }
     }
 
     public Optional<ImportInfo> importWithChecksum(String sha256) {
@@ -131,7 +200,8 @@ public final class LibraryReader {
 
     /** Everything, in the fixed order of {@link LibrarySnapshot}. */
     public LibrarySnapshot snapshot() {
-        return new LibrarySnapshot(imports(DSL.noCondition()), gradeRows(DSL.noCondition()), curveRows(DSL.noCondition()),
+        return new LibrarySnapshot(imports(DSL.noCondition()), gradeRows(DSL.noCondition()).stream().map(StoredGrade::grade).toList(),
+                curveRows(DSL.noCondition()),
                 susceptibility(null), fits());
     }
 
@@ -142,7 +212,7 @@ public final class LibraryReader {
     /** Row count of every table, for checks that a failed write left nothing behind. */
     public Map<String, Integer> rowCounts() {
         Map<String, Integer> counts = new LinkedHashMap<>();
-        for (Table<? extends Record> table : List.of(IMPORT_RECORD, MATERIAL_FAMILY, GRADE, CURVE, SUSCEPTIBILITY_POINT, FIT)) {
+        for (Table<? extends Record> table : List.of(IMPORT_RECORD, MATERIAL_FAMILY, GRADE, CURVE, CURVE_PIECE, SUSCEPTIBILITY_POINT, FIT)) {
             counts.put(table.getName(), dsl.fetchCount(table));
         }
         return counts;

@@ -4,9 +4,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.locks.ReentrantLock;
 import org.jooq.DSLContext;
+import org.jooq.exception.DataAccessException;
 import org.jooq.impl.DSL;
 import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.fitter.library.FitRecord;
+import org.kneepoint.fitter.library.GradeDetails;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.ImportBatch;
 import org.kneepoint.fitter.library.ImportInfo;
@@ -17,15 +19,23 @@ import org.kneepoint.fitter.library.SusceptibilityPoint;
 /**
  * Writes to the library, each call one transaction: an import batch, a restore, a fit. Writers of
  * one {@link Library} take turns (a lock), so concurrent imports never interleave their rows.
+ * Writers in other processes sharing one server are kept apart by the database itself: unique
+ * names and checksums, and a transaction that loses a race for one (or is chosen as a deadlock or
+ * serialization victim) is run again from the start, when it sees the winner's rows.
  */
 public final class LibraryWriter {
 
+    /** Runs of one transaction that lost a race to another process before the error is reported. */
+    private static final int ATTEMPTS = 4;
+
     private final DSLContext dsl;
     private final ReentrantLock turn;
+    private final ConnectionFailures failures;
 
-    LibraryWriter(DSLContext dsl, ReentrantLock turn) {
+    LibraryWriter(DSLContext dsl, ReentrantLock turn, ConnectionFailures failures) {
         this.dsl = dsl;
         this.turn = turn;
+        this.failures = failures;
     }
 
     /** Stores one import: its record, new grades, curves and susceptibility points. Nothing is written on any error. */
@@ -85,6 +95,17 @@ public final class LibraryWriter {
         });
     }
 
+    /**
+     * Replaces a grade's details, provided nobody changed the grade since {@code expectedVersion}
+     * (optimistic locking); returns the new version. A stale version is a conflict, an unknown
+     * grade not found; either way nothing is written.
+     */
+    public int editGrade(String name, int expectedVersion, GradeDetails details) {
+        int[] version = new int[1];
+        inTransaction(rows -> version[0] = rows.editGrade(name, expectedVersion, details));
+        return version[0];
+    }
+
     /** Stores a fit with the grade, curve or material it came from. */
     public void saveFit(FitRecord fit) {
         inTransaction(rows -> rows.insertFit(fit));
@@ -101,7 +122,20 @@ public final class LibraryWriter {
     private void inTransaction(java.util.function.Consumer<RowWriter> work) {
         turn.lock();
         try {
-            dsl.transaction(configuration -> work.accept(new RowWriter(DSL.using(configuration))));
+            for (int attempt = 1; ; attempt++) {
+                try {
+                    dsl.transaction(configuration -> work.accept(new RowWriter(DSL.using(configuration))));
+                    return;
+                } catch (DataAccessException e) {
+                    if (attempt == ATTEMPTS || !ConcurrentWrites.lostRace(e)) {
+                        throw ConcurrentWrites.lostRace(e)
+                                ? new ConflictException("another writer kept changing the same rows; nothing was written, try again")
+                                : e;
+                    }
+                }
+            }
+        } catch (RuntimeException e) {
+            throw failures.translate(e);
         } finally {
             turn.unlock();
         }

@@ -3,24 +3,33 @@ package org.kneepoint.db;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 
-/** A column of doubles as bytes: big-endian IEEE-754, 8 bytes each, exact both ways. */
+/**
+ * A column of doubles as bytes: big-endian IEEE-754, 8 bytes each, exact both ways; long columns
+ * are cut into pieces of at most {@link #PIECE} values, stored in rows of their own (see the
+ * migration V3), and joined again on reading.
+ */
 final class PackedDoubles {
+
+    /** Values in the curve row and in each further piece. */
+    static final int PIECE = 4096;
 
     private PackedDoubles() {
     }
 
-    static byte[] pack(double[] values) {
-        ByteBuffer buffer = ByteBuffer.allocate(values.length * Double.BYTES).order(ByteOrder.BIG_ENDIAN);
-        buffer.asDoubleBuffer().put(values);
+    /** The values from {@code from} (inclusive) to {@code to} (exclusive). */
+    static byte[] pack(double[] values, int from, int to) {
+        ByteBuffer buffer = ByteBuffer.allocate((to - from) * Double.BYTES).order(ByteOrder.BIG_ENDIAN);
+        buffer.asDoubleBuffer().put(values, from, to - from);
         return buffer.array();
     }
 
-    static double[] unpack(byte[] bytes, int expectedCount) {
-        if (bytes.length != expectedCount * Double.BYTES) {
-            throw new IllegalStateException("a stored curve holds " + bytes.length + " bytes for " + expectedCount + " points");
+    /** Copies the packed values into {@code values} from {@code offset}; returns the offset after them. */
+    static int unpackInto(byte[] bytes, double[] values, int offset) {
+        int count = bytes.length / Double.BYTES;
+        if (bytes.length % Double.BYTES != 0 || offset + count > values.length) {
+            throw new IllegalStateException("a stored curve holds " + bytes.length + " bytes at point " + offset + " of " + values.length);
         }
-        double[] values = new double[expectedCount];
-        ByteBuffer.wrap(bytes).order(ByteOrder.BIG_ENDIAN).asDoubleBuffer().get(values);
-        return values;
+        ByteBuffer.wrap(bytes).order(ByteOrder.BIG_ENDIAN).asDoubleBuffer().get(values, offset, count);
+        return offset + count;
     }
 }

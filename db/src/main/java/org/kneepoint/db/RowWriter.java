@@ -1,6 +1,7 @@
 package org.kneepoint.db;
 
 import static org.kneepoint.db.jooq.Tables.CURVE;
+import static org.kneepoint.db.jooq.Tables.CURVE_PIECE;
 import static org.kneepoint.db.jooq.Tables.FIT;
 import static org.kneepoint.db.jooq.Tables.GRADE;
 import static org.kneepoint.db.jooq.Tables.IMPORT_RECORD;
@@ -13,7 +14,9 @@ import org.jooq.DSLContext;
 import org.jooq.Record1;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.error.ConflictException;
+import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.fitter.library.FitRecord;
+import org.kneepoint.fitter.library.GradeDetails;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.ImportInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
@@ -52,16 +55,21 @@ final class RowWriter {
                 : tx.select(IMPORT_RECORD.ID).from(IMPORT_RECORD).where(IMPORT_RECORD.SHA256.eq(sha256)).fetchOne(IMPORT_RECORD.ID);
     }
 
-    /** The id of the grade, inserting it (and its family) when new; a stored grade of another family is a conflict. */
+    /**
+     * The id of the grade, inserting it (and its family) when new; a stored grade of another family
+     * is a conflict. A stored grade's row is locked until the transaction ends, so that writers in
+     * other processes add curves to one grade one after the other and each sees the other's curves.
+     */
     long ensureGrade(GradeInfo grade) {
-        var existing = tx.select(GRADE.ID, MATERIAL_FAMILY.NAME).from(GRADE).join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
-                .where(GRADE.NAME.eq(grade.name())).fetchOne();
-        if (existing != null) {
-            if (!existing.value2().equals(grade.family())) {
-                throw new ConflictException("grade '" + grade.name() + "' is stored as family '" + existing.value2()
+        Long id = tx.select(GRADE.ID).from(GRADE).where(GRADE.NAME.eq(grade.name())).forUpdate().fetchOne(GRADE.ID);
+        if (id != null) {
+            String family = tx.select(MATERIAL_FAMILY.NAME).from(MATERIAL_FAMILY).join(GRADE).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
+                    .where(GRADE.ID.eq(id)).fetchOne(MATERIAL_FAMILY.NAME);
+            if (!grade.family().equals(family)) {
+                throw new ConflictException("grade '" + grade.name() + "' is stored as family '" + family
                         + "', not '" + grade.family() + "'");
             }
-            return existing.value1();
+            return id;
         }
         return tx.insertInto(GRADE)
                 .set(GRADE.NAME, grade.name())
@@ -70,7 +78,33 @@ final class RowWriter {
                 .set(GRADE.DENSITY, grade.density())
                 .set(GRADE.NOTES, grade.notes())
                 .set(GRADE.PROVENANCE, grade.provenance())
+                .set(GRADE.PRICE, grade.price())
                 .returning(GRADE.ID).fetchOne().getId();
+    }
+
+    /**
+     * Replaces the grade's details when its row is still at {@code expectedVersion}, and returns the
+     * new version. The version test and the update are one statement, so of two concurrent edits
+     * from the same version exactly one succeeds (the database holds the row lock between them).
+     */
+    int editGrade(String name, int expectedVersion, GradeDetails details) {
+        int updated = tx.update(GRADE)
+                .set(GRADE.SUPPLIER, details.supplier())
+                .set(GRADE.DENSITY, details.density())
+                .set(GRADE.NOTES, details.notes())
+                .set(GRADE.PRICE, details.price())
+                .set(GRADE.ROW_VERSION, GRADE.ROW_VERSION.plus(1))
+                .where(GRADE.NAME.eq(name)).and(GRADE.ROW_VERSION.eq(expectedVersion))
+                .execute();
+        Integer version = tx.select(GRADE.ROW_VERSION).from(GRADE).where(GRADE.NAME.eq(name)).fetchOne(GRADE.ROW_VERSION);
+        if (version == null) {
+            throw new NotFoundException("no grade named '" + name + "' in the library");
+        }
+        if (updated == 0) {
+            throw new ConflictException("grade '" + name + "' was changed by someone else since version " + expectedVersion
+                    + " (it is now at version " + version + "); read it again and redo the edit");
+        }
+        return version;
     }
 
     private long ensureFamily(String family) {
@@ -81,7 +115,10 @@ final class RowWriter {
         return tx.insertInto(MATERIAL_FAMILY).set(MATERIAL_FAMILY.NAME, family).returning(MATERIAL_FAMILY.ID).fetchOne().getId();
     }
 
-    /** Inserts a curve and its points; a curve of the same kind at the same temperature is a conflict. */
+    /**
+     * Inserts a curve and its points (the first {@link PackedDoubles#PIECE} in its row, the rest in
+     * pieces); a curve of the same kind at the same temperature is a conflict.
+     */
     void insertCurve(long gradeId, LibraryCurve stored, Long importId) {
         DemagnetizationCurve curve = stored.curve();
         String kind = curve.kind().name().toLowerCase(Locale.ROOT);
@@ -92,7 +129,10 @@ final class RowWriter {
             throw new ConflictException(String.format(Locale.ROOT, "grade '%s' already has a %s curve at %.2f K",
                     stored.grade(), kind, curve.temperatureK()));
         }
-        tx.insertInto(CURVE)
+        double[] h = curve.h();
+        double[] values = curve.values();
+        int first = Math.min(h.length, PackedDoubles.PIECE);
+        long curveId = tx.insertInto(CURVE)
                 .set(CURVE.GRADE_ID, gradeId)
                 .set(CURVE.TEMPERATURE_K, curve.temperatureK())
                 .set(CURVE.KIND, kind)
@@ -100,9 +140,20 @@ final class RowWriter {
                 .set(CURVE.SOURCE, stored.source())
                 .set(CURVE.IMPORT_ID, importId)
                 .set(CURVE.POINT_COUNT, curve.size())
-                .set(CURVE.H_VALUES, PackedDoubles.pack(curve.h()))
-                .set(CURVE.MEASURED_VALUES, PackedDoubles.pack(curve.values()))
-                .execute();
+                .set(CURVE.H_VALUES, PackedDoubles.pack(h, 0, first))
+                .set(CURVE.MEASURED_VALUES, PackedDoubles.pack(values, 0, first))
+                .returning(CURVE.ID).fetchOne().getId();
+        if (first == h.length) {
+            return;
+        }
+        var pieces = tx.batch(tx.insertInto(CURVE_PIECE, CURVE_PIECE.CURVE_ID, CURVE_PIECE.PIECE, CURVE_PIECE.H_VALUES,
+                CURVE_PIECE.MEASURED_VALUES).values((Long) null, null, null, null));
+        int piece = 1;
+        for (int from = first; from < h.length; from += PackedDoubles.PIECE, piece++) {
+            int to = Math.min(h.length, from + PackedDoubles.PIECE);
+            pieces.bind(curveId, piece, PackedDoubles.pack(h, from, to), PackedDoubles.pack(values, from, to));
+        }
+        pieces.execute();
     }
 
     void insertSusceptibility(SusceptibilityPoint point, Long importId) {

@@ -1,19 +1,52 @@
 package org.kneepoint.db;
 
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.SQLException;
+import java.sql.Statement;
 import java.time.Instant;
 import java.util.UUID;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.curve.Quantity;
 import org.kneepoint.fitter.library.ImportInfo;
 
-/** Fresh, uniquely named in-memory libraries and small invented content for db tests. */
+/**
+ * Fresh libraries on both engines and small invented content for db tests. H2: a uniquely named
+ * in-memory database. PostgreSQL: a new schema in the server tests/run starts and names in
+ * {@code KNEEPOINT_TEST_POSTGRES_URL}; without it the PostgreSQL cases fail (run them with tests/run).
+ */
 final class TestLibraries {
+
+    /** The database engines every db test runs on. */
+    enum Engine { H2, POSTGRESQL }
 
     private TestLibraries() {
     }
 
     static Library fresh() {
-        return Library.open(new DatabaseLocation("jdbc:h2:mem:kneepoint-" + UUID.randomUUID() + ";DB_CLOSE_DELAY=-1"));
+        return fresh(Engine.H2);
+    }
+
+    static Library fresh(Engine engine) {
+        return Library.open(freshLocation(engine));
+    }
+
+    /** A new, empty database of the engine; open it twice for two independent library instances. */
+    static DatabaseLocation freshLocation(Engine engine) {
+        if (engine == Engine.H2) {
+            return new DatabaseLocation("jdbc:h2:mem:kneepoint-" + UUID.randomUUID() + ";DB_CLOSE_DELAY=-1");
+        }
+        String url = System.getenv("KNEEPOINT_TEST_POSTGRES_URL");
+        if (url == null) {
+            throw new IllegalStateException("KNEEPOINT_TEST_POSTGRES_URL is not set: run the tests with tests/run, which starts PostgreSQL");
+        }
+        String schema = "kp_" + UUID.randomUUID().toString().replace("-", "");
+        try (Connection connection = DriverManager.getConnection(url); Statement statement = connection.createStatement()) {
+            statement.execute("CREATE SCHEMA " + schema);
+        } catch (SQLException e) {
+            throw new IllegalStateException("cannot create a test schema on " + url, e);
+        }
+        return new DatabaseLocation(url + "&currentSchema=" + schema);
     }
 
     static ImportInfo importInfo(String fileName, int seed, int curves, int points) {

@@ -9,5 +9,7 @@ public enum ErrorCode {
     /** The request contradicts what is already stored. */
     CONFLICT,
     /** A computation failed to converge or left its domain. */
-    NUMERICAL_FAILURE
+    NUMERICAL_FAILURE,
+    /** The library's database cannot be reached; nothing was written, the request may be retried. */
+    UNAVAILABLE
 }

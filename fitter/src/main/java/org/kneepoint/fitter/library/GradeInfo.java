@@ -9,14 +9,24 @@ package org.kneepoint.fitter.library;
  * @param density    kg/m³, or null
  * @param notes      free text, or null
  * @param provenance where the grade came from (file, checksum, source text), or null
+ * @param price      price per kilogram in the team's one currency, or null when not known
  */
-public record GradeInfo(String name, String family, String supplier, Double density, String notes, String provenance) {
+public record GradeInfo(String name, String family, String supplier, Double density, String notes, String provenance,
+        Double price) {
+
+    /** A grade without a price (as every import makes it; a price is set by an edit). */
+    public GradeInfo(String name, String family, String supplier, Double density, String notes, String provenance) {
+        this(name, family, supplier, density, notes, provenance, null);
+    }
 
     public GradeInfo {
         LibraryText.requireName("grade name", name);
         LibraryText.requireName("family", family, LibraryText.MAX_FAMILY);
         if (density != null && !(density > 0 && Double.isFinite(density))) {
             throw new IllegalArgumentException("density must be positive and finite, got " + density);
+        }
+        if (price != null && !(price >= 0 && Double.isFinite(price))) {
+            throw new IllegalArgumentException("price must be zero or positive and finite, got " + price);
         }
     }
 }

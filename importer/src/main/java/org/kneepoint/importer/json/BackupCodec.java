@@ -74,6 +74,7 @@ public final class BackupCodec {
         json.put("density", grade.density());
         json.put("notes", grade.notes());
         json.put("provenance", grade.provenance());
+        json.put("price", grade.price());
         return json;
     }
 
@@ -143,7 +144,8 @@ public final class BackupCodec {
             List<GradeInfo> grades = new ArrayList<>();
             for (JsonNode node : fields.array(root, "grades")) {
                 grades.add(new GradeInfo(fields.text(node, "name"), fields.text(node, "family"), fields.optionalText(node, "supplier"),
-                        fields.optionalNumber(node, "density"), fields.optionalText(node, "notes"), fields.optionalText(node, "provenance")));
+                        fields.optionalNumber(node, "density"), fields.optionalText(node, "notes"), fields.optionalText(node, "provenance"),
+                        fields.optionalNumber(node, "price")));
             }
             List<LibraryCurve> curves = new ArrayList<>();
             for (JsonNode node : fields.array(root, "curves")) {

@@ -7,7 +7,8 @@ import picocli.CommandLine;
 /**
  * The one place where the CLI turns failures into output and exit codes: a single line on
  * standard error, no stack trace. Exit codes: 0 success; 2 bad input, unknown names, conflicts and
- * bad command-line arguments; 3 a computation that failed numerically; 1 an internal error (a
+ * bad command-line arguments; 3 a computation that failed numerically; 4 the library's database
+ * cannot be reached (nothing was written; run the command again when it is back); 1 an internal error (a
  * bug: set {@code KNEEPOINT_DEBUG=1} to see its stack trace).
  */
 public final class ErrorReporting {
@@ -15,6 +16,7 @@ public final class ErrorReporting {
     public static final int BAD_INPUT = 2;
     public static final int NUMERICAL_FAILURE = 3;
     public static final int INTERNAL_ERROR = 1;
+    public static final int UNAVAILABLE = 4;
 
     private ErrorReporting() {
     }
@@ -31,6 +33,7 @@ public final class ErrorReporting {
             err.flush();
             return switch (known.code()) {
                 case NUMERICAL_FAILURE -> NUMERICAL_FAILURE;
+                case UNAVAILABLE -> UNAVAILABLE;
                 case BAD_INPUT, NOT_FOUND, CONFLICT -> BAD_INPUT;
             };
         }

@@ -2,7 +2,7 @@ package org.kneepoint.server.http;
 
 import org.kneepoint.fitter.error.KneepointException;
 
-/** The HTTP status of each kind of known failure: bad input 400, not found 404, conflict 409, numerical failure 422. */
+/** The HTTP status of each kind of known failure: bad input 400, not found 404, conflict 409, numerical failure 422, database unreachable 503. */
 public final class ErrorStatus {
 
     private ErrorStatus() {
@@ -15,6 +15,7 @@ public final class ErrorStatus {
             case NOT_FOUND -> 404;
             case CONFLICT -> 409;
             case NUMERICAL_FAILURE -> 422;
+            case UNAVAILABLE -> 503;
         };
     }
 }

@@ -1,0 +1,29 @@
+package org.kneepoint.fitter.library;
+
+/**
+ * The details of a grade that people edit after import (its name, family, curves and provenance
+ * stay as imported). An edit replaces all four; null clears one.
+ *
+ * @param supplier supplier text, or null
+ * @param density  kg/m³, or null
+ * @param notes    free text, or null
+ * @param price    price per kilogram in the team's one currency, or null
+ */
+public record GradeDetails(String supplier, Double density, String notes, Double price) {
+
+    public GradeDetails {
+        LibraryText.requireLength("supplier", supplier, LibraryText.MAX_SUPPLIER);
+        LibraryText.requireLength("notes", notes, LibraryText.MAX_NOTES);
+        if (density != null && !(density > 0 && Double.isFinite(density))) {
+            throw new IllegalArgumentException("density must be positive and finite, got " + density);
+        }
+        if (price != null && !(price >= 0 && Double.isFinite(price))) {
+            throw new IllegalArgumentException("price must be zero or positive and finite, got " + price);
+        }
+    }
+
+    /** The details of a stored grade. */
+    public static GradeDetails of(GradeInfo grade) {
+        return new GradeDetails(grade.supplier(), grade.density(), grade.notes(), grade.price());
+    }
+}
