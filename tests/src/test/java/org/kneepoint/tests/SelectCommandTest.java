@@ -53,7 +53,7 @@ class SelectCommandTest {
             List<String> keys = new ArrayList<>();
             row.fieldNames().forEachRemaining(keys::add);
             assertEquals(List.of("grade", "family", "assessable", "pass", "reasons", "fluxDensity", "kneeMarginH",
-                    "irreversibleLossPercent", "maxWorkingTemperatureK", "extrapolated"), keys);
+                    "irreversibleLossPercent", "maxWorkingTemperatureK", "extrapolated", "price"), keys);
             assertTrue(row.get("reasons").isArray());
             assertEquals(row.get("pass").asBoolean(), row.get("reasons").isEmpty(), row.toString());
         }
@@ -116,6 +116,7 @@ class SelectCommandTest {
         margin,      kneeMarginH,             -1
         loss,        irreversibleLossPercent, 1
         temperature, maxWorkingTemperatureK,  -1
+        price,       price,                   1
         """)
     void rows_are_passing_first_then_in_the_sort_key_order(String sort, String key, int direction) throws IOException {
         JsonNode rows = select("--pc", "1", "--temperature", "120C", "--opposing-field", "300kA/m", "--sort", sort);
@@ -186,7 +187,7 @@ class SelectCommandTest {
 
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', textBlock = """
-        unknown sort key  | --pc 1 --temperature 20C --sort price
+        unknown sort key  | --pc 1 --temperature 20C --sort cost
         no load line      | --temperature 20C
         no temperature    | --pc 1
         loss without %    | --pc 1 --temperature 20C --max-loss 1

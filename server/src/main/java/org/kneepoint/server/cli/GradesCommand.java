@@ -1,12 +1,13 @@
 package org.kneepoint.server.cli;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import java.util.Locale;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.library.GradeSummary;
+import org.kneepoint.server.text.GradeJson;
 import org.kneepoint.server.text.Json;
 import org.kneepoint.server.text.PlainText;
 import org.kneepoint.server.text.Temperatures;
@@ -42,13 +43,7 @@ final class GradesCommand implements Callable<Integer> {
         if (json) {
             List<Map<String, Object>> rows = new ArrayList<>();
             for (GradeSummary grade : grades) {
-                Map<String, Object> row = new LinkedHashMap<>();
-                row.put("name", grade.name());
-                row.put("family", grade.family());
-                row.put("supplier", grade.supplier());
-                row.put("temperaturesK", grade.temperaturesK());
-                row.put("curves", grade.curves());
-                rows.add(row);
+                rows.add(GradeJson.summary(grade));
             }
             out.println(Json.write(rows));
         } else if (grades.isEmpty()) {
@@ -56,10 +51,10 @@ final class GradesCommand implements Callable<Integer> {
                     : "No grades of family '" + family + "'.");
         } else {
             int width = Math.min(40, grades.stream().mapToInt(grade -> grade.name().length()).max().orElse(5));
-            out.printf("%-" + width + "s  %-18s  %s%n", "grade", "family", "curves at");
+            out.printf("%-" + width + "s  %-18s  %10s  %s%n", "grade", "family", "price /kg", "curves at");
             for (GradeSummary grade : grades) {
-                out.printf("%-" + width + "s  %-18s  %s%n", PlainText.printable(grade.name()), PlainText.printable(grade.family()),
-                        Temperatures.list(grade.temperaturesK()));
+                out.printf("%-" + width + "s  %-18s  %10s  %s%n", PlainText.printable(grade.name()), PlainText.printable(grade.family()),
+                        grade.price() == null ? "-" : String.format(Locale.ROOT, "%.2f", grade.price()), Temperatures.list(grade.temperaturesK()));
             }
         }
         out.flush();

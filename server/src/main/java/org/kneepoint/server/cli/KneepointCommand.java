@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
         subcommands = {CurveCommand.class, ImportCommand.class, GradesCommand.class, ExportCommand.class,
             BackupCommand.class, RestoreCommand.class, DemoCommand.class, FitCommand.class, JilesAthertonCommand.class,
             PermeanceCommand.class, FieldCommand.class, CheckCommand.class, DutyCommand.class, SelectCommand.class,
-            ServeCommand.class, PlotCommand.class,
+            ServeCommand.class, PlotCommand.class, EditCommand.class,
             CommandLine.HelpCommand.class})
 public final class KneepointCommand implements Runnable {
 

@@ -53,7 +53,7 @@ final class SelectCommand implements Callable<Integer> {
     private String family;
 
     @Option(names = "--sort", defaultValue = "flux",
-            description = "Order within passing and failing grades: flux, margin, loss or temperature (default: ${DEFAULT-VALUE}).")
+            description = "Order within passing and failing grades: flux, margin, loss, temperature or price (default: ${DEFAULT-VALUE}).")
     private String sort;
 
     @Option(names = "--json", description = "Print a JSON array (SI units) instead of a table.")

@@ -27,6 +27,11 @@ record ApiRoute(String method, String path, String summary, List<ApiParameter> p
         return new ApiRoute("post", path, summary, List.of(parameters), handler, 200, true);
     }
 
+    /** A POST whose input is its query parameters, answering 200. */
+    static ApiRoute change(String path, String summary, Handler handler, ApiParameter... parameters) {
+        return new ApiRoute("post", path, summary, List.of(parameters), handler, 200, false);
+    }
+
     /** A POST without a body that starts a background job and answers 202 Accepted. */
     static ApiRoute start(String path, String summary, Handler handler, ApiParameter... parameters) {
         return new ApiRoute("post", path, summary, List.of(parameters), handler, 202, false);

@@ -51,7 +51,7 @@ final class DesignParameters {
         all.add(ApiParameter.query("minFluxDensity", false, "least flux density B at the operating point (default none)", "1T"));
         all.add(ApiParameter.query("maxLoss", false, "largest irreversible loss allowed (default 1%)", "1%"));
         all.add(ApiParameter.query("family", false, "only grades of this family", "sintered NdFeB"));
-        all.add(ApiParameter.query("sort", false, "flux (default), margin, loss or temperature", "flux"));
+        all.add(ApiParameter.query("sort", false, "flux (default), margin, loss, temperature or price", "flux"));
         return all.toArray(ApiParameter[]::new);
     }
 

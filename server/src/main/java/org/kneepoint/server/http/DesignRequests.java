@@ -70,7 +70,7 @@ public final class DesignRequests {
     public static SelectionRun select(Context context, LibraryReader reader) {
         Query query = new Query(context);
         LoadLineSpec loadLine = loadLine(query);
-        RankingOrder order = SelectionSort.of(query.choice("sort", "flux", "flux", "margin", "loss", "temperature"));
+        RankingOrder order = SelectionSort.of(query.choice("sort", "flux", "flux", "margin", "loss", "temperature", "price"));
         double temperature = query.temperatureK("temperature");
         Requirements requirements = new Requirements(new LoadLine(loadLine.permeanceCoefficient(), opposingField(query)), temperature,
                 query.optionalQuantity("minFluxDensity", Dimension.FLUX_DENSITY, "1T"), percent(query, "maxLoss", 1.0) / 100.0);

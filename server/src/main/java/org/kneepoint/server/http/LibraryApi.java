@@ -9,18 +9,19 @@ import org.kneepoint.db.Library;
 import org.kneepoint.fitter.curve.CurveCharacterizer;
 import org.kneepoint.fitter.curve.CurveTables;
 import org.kneepoint.fitter.curve.Quantity;
-import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.GradeSummary;
 import org.kneepoint.fitter.library.LibraryCurve;
+import org.kneepoint.fitter.library.StoredGrade;
 import org.kneepoint.importer.export.ExportUnits;
 import org.kneepoint.server.cli.VersionInfo;
 import org.kneepoint.server.library.CurveExport;
 import org.kneepoint.server.library.GradeCurve;
 import org.kneepoint.server.library.GradeCurves;
 import org.kneepoint.server.text.CharacterizationView;
+import org.kneepoint.server.text.GradeJson;
 import org.kneepoint.server.text.Json;
 
-/** The library routes: grades, one grade, its characterization at a temperature, its export. */
+/** The library routes: grades, one grade, an edit of its details, its characterization at a temperature, its export. */
 final class LibraryApi {
 
     private final Library library;
@@ -32,7 +33,7 @@ final class LibraryApi {
     void grades(Context context) {
         List<Map<String, Object>> rows = new ArrayList<>();
         for (GradeSummary grade : library.reader().grades(new Query(context).text("family"))) {
-            rows.add(summary(grade));
+            rows.add(GradeJson.summary(grade));
         }
         json(context, rows);
     }
@@ -40,25 +41,28 @@ final class LibraryApi {
     void grade(Context context) {
         String name = context.pathParam("name");
         List<LibraryCurve> curves = GradeCurves.stored(library.reader(), name);
-        GradeInfo info = library.reader().grade(name).orElseThrow();
-        Map<String, Object> grade = new LinkedHashMap<>();
-        grade.put("name", info.name());
-        grade.put("family", info.family());
-        grade.put("supplier", info.supplier());
-        grade.put("density", info.density());
-        grade.put("notes", info.notes());
-        grade.put("provenance", info.provenance());
-        List<Map<String, Object>> stored = new ArrayList<>();
+        json(context, gradeJson(library.reader().storedGrade(name).orElseThrow(), curves));
+    }
+
+    /** Edits the grade's details from the version the client read; answers the grade as it is now. */
+    void editDetails(Context context) {
+        StoredGrade edited = GradeEditRequests.fromQuery(context, library);
+        json(context, gradeJson(edited, library.reader().curves(edited.grade().name())));
+    }
+
+    private static Map<String, Object> gradeJson(StoredGrade stored, List<LibraryCurve> curves) {
+        Map<String, Object> grade = GradeJson.details(stored);
+        List<Map<String, Object>> rows = new ArrayList<>();
         for (LibraryCurve curve : curves) {
             Map<String, Object> row = new LinkedHashMap<>();
             row.put("temperatureK", curve.curve().temperatureK());
             row.put("kind", curve.curve().kind().name().toLowerCase(java.util.Locale.ROOT));
             row.put("points", curve.curve().size());
             row.put("source", curve.source());
-            stored.add(row);
+            rows.add(row);
         }
-        grade.put("curves", stored);
-        json(context, grade);
+        grade.put("curves", rows);
+        return grade;
     }
 
     void curve(Context context) {
@@ -83,16 +87,6 @@ final class LibraryApi {
         GradeCurves.stored(library.reader(), name);
         String text = export.write(library.reader(), VersionInfo.version());
         context.contentType(format.equals("json") ? "application/json" : "text/csv; charset=utf-8").result(text);
-    }
-
-    static Map<String, Object> summary(GradeSummary grade) {
-        Map<String, Object> row = new LinkedHashMap<>();
-        row.put("name", grade.name());
-        row.put("family", grade.family());
-        row.put("supplier", grade.supplier());
-        row.put("temperaturesK", grade.temperaturesK());
-        row.put("curves", grade.curves());
-        return row;
     }
 
     static void json(Context context, Object value) {

@@ -18,7 +18,8 @@ import java.util.List;
  * @param roundness    knee shape: width of the knee as a fraction of HcJ (larger is rounder); for AlNiCo the exponent shape
  * @param celsius      temperatures of the generated curves, °C
  * @param cgsUnits     whether the curve file is written in kOe and kG instead of kA/m and T
+ * @param price        invented price per kilogram in a demo currency, set on the grade after import
  */
 record DemoGrade(String name, String family, String supplier, double density, double br, double hcj, double muRec,
-        double alpha, double beta, double roundness, List<Integer> celsius, boolean cgsUnits) {
+        double alpha, double beta, double roundness, List<Integer> celsius, boolean cgsUnits, double price) {
 }

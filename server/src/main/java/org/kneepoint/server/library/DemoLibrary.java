@@ -29,18 +29,18 @@ public final class DemoLibrary {
     static final String SOUTH = "Supplier South (invented)";
 
     static final List<DemoGrade> GRADES = List.of(
-            new DemoGrade("DEMO NdFeB 42/100", "sintered NdFeB", NORTH, 7500, 1.31, 1.00e6, 1.05, -0.12, -0.60, 0.030, List.of(20, 60, 80, 100), true),
-            new DemoGrade("DEMO NdFeB 40/160", "sintered NdFeB", NORTH, 7500, 1.27, 1.60e6, 1.05, -0.12, -0.58, 0.030, List.of(20, 80, 120, 150), false),
-            new DemoGrade("DEMO NdFeB 38/200", "sintered NdFeB", SOUTH, 7550, 1.24, 2.00e6, 1.05, -0.115, -0.55, 0.035, List.of(20, 80, 120, 150, 180), true),
-            new DemoGrade("DEMO NdFeB 35/250", "sintered NdFeB", SOUTH, 7550, 1.19, 2.50e6, 1.04, -0.11, -0.52, 0.035, List.of(20, 100, 150, 200, 220), false),
-            new DemoGrade("DEMO NdFeB 33/280", "sintered NdFeB", NORTH, 7600, 1.16, 2.80e6, 1.04, -0.105, -0.50, 0.040, List.of(20, 100, 150, 200), false),
-            new DemoGrade("DEMO SmCo 28/200", "sintered SmCo", SOUTH, 8300, 1.07, 2.00e6, 1.03, -0.035, -0.25, 0.040, List.of(20, 100, 200, 300, 350), false),
-            new DemoGrade("DEMO SmCo 18/160", "sintered SmCo", NORTH, 8300, 0.88, 1.60e6, 1.04, -0.045, -0.30, 0.050, List.of(20, 100, 200, 250), true),
-            new DemoGrade("DEMO Ferrite 30/26", "hard ferrite", SOUTH, 4900, 0.40, 2.60e5, 1.10, -0.20, 0.30, 0.060, List.of(-40, 0, 20, 80, 150), false),
-            new DemoGrade("DEMO Ferrite 27/33", "hard ferrite", NORTH, 4950, 0.38, 3.30e5, 1.10, -0.19, 0.20, 0.060, List.of(-40, 20, 80, 150), true),
-            new DemoGrade("DEMO AlNiCo 5", "cast AlNiCo", SOUTH, 7300, 1.25, 5.2e4, 0, -0.02, 0.01, 5.0, List.of(20, 200, 400, 500), false),
-            new DemoGrade("DEMO AlNiCo 8", "cast AlNiCo", NORTH, 7300, 0.82, 1.3e5, 0, -0.025, 0.01, 3.0, List.of(20, 200, 400), false),
-            new DemoGrade("DEMO bonded NdFeB 10/70", "bonded NdFeB", SOUTH, 6000, 0.68, 7.2e5, 1.15, -0.11, -0.40, 0.100, List.of(20, 80, 120, 150), false));
+            new DemoGrade("DEMO NdFeB 42/100", "sintered NdFeB", NORTH, 7500, 1.31, 1.00e6, 1.05, -0.12, -0.60, 0.030, List.of(20, 60, 80, 100), true, 45.0),
+            new DemoGrade("DEMO NdFeB 40/160", "sintered NdFeB", NORTH, 7500, 1.27, 1.60e6, 1.05, -0.12, -0.58, 0.030, List.of(20, 80, 120, 150), false, 55.0),
+            new DemoGrade("DEMO NdFeB 38/200", "sintered NdFeB", SOUTH, 7550, 1.24, 2.00e6, 1.05, -0.115, -0.55, 0.035, List.of(20, 80, 120, 150, 180), true, 68.0),
+            new DemoGrade("DEMO NdFeB 35/250", "sintered NdFeB", SOUTH, 7550, 1.19, 2.50e6, 1.04, -0.11, -0.52, 0.035, List.of(20, 100, 150, 200, 220), false, 82.0),
+            new DemoGrade("DEMO NdFeB 33/280", "sintered NdFeB", NORTH, 7600, 1.16, 2.80e6, 1.04, -0.105, -0.50, 0.040, List.of(20, 100, 150, 200), false, 95.0),
+            new DemoGrade("DEMO SmCo 28/200", "sintered SmCo", SOUTH, 8300, 1.07, 2.00e6, 1.03, -0.035, -0.25, 0.040, List.of(20, 100, 200, 300, 350), false, 120.0),
+            new DemoGrade("DEMO SmCo 18/160", "sintered SmCo", NORTH, 8300, 0.88, 1.60e6, 1.04, -0.045, -0.30, 0.050, List.of(20, 100, 200, 250), true, 105.0),
+            new DemoGrade("DEMO Ferrite 30/26", "hard ferrite", SOUTH, 4900, 0.40, 2.60e5, 1.10, -0.20, 0.30, 0.060, List.of(-40, 0, 20, 80, 150), false, 4.2),
+            new DemoGrade("DEMO Ferrite 27/33", "hard ferrite", NORTH, 4950, 0.38, 3.30e5, 1.10, -0.19, 0.20, 0.060, List.of(-40, 20, 80, 150), true, 4.8),
+            new DemoGrade("DEMO AlNiCo 5", "cast AlNiCo", SOUTH, 7300, 1.25, 5.2e4, 0, -0.02, 0.01, 5.0, List.of(20, 200, 400, 500), false, 38.0),
+            new DemoGrade("DEMO AlNiCo 8", "cast AlNiCo", NORTH, 7300, 0.82, 1.3e5, 0, -0.025, 0.01, 3.0, List.of(20, 200, 400), false, 52.0),
+            new DemoGrade("DEMO bonded NdFeB 10/70", "bonded NdFeB", SOUTH, 6000, 0.68, 7.2e5, 1.15, -0.11, -0.40, 0.100, List.of(20, 80, 120, 150), false, 60.0));
 
     private static final int POINTS = 120;
     private static final double NOISE = 5e-4;
@@ -59,6 +59,13 @@ public final class DemoLibrary {
     }
 
     /** Names of the demo grades. */
+    /** The invented price per kilogram of each demo grade (a demo currency; roughly in the order of real families' costs, from memory). */
+    static Map<String, Double> prices() {
+        Map<String, Double> prices = new java.util.LinkedHashMap<>();
+        GRADES.forEach(grade -> prices.put(grade.name(), grade.price()));
+        return prices;
+    }
+
     public static List<String> gradeNames() {
         return GRADES.stream().map(DemoGrade::name).toList();
     }

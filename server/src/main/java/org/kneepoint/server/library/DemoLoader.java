@@ -12,13 +12,15 @@ import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
 import org.kneepoint.db.Library;
+import org.kneepoint.fitter.library.GradeDetails;
 import org.kneepoint.fitter.library.ImportBatch;
 import org.kneepoint.importer.csv.ReadLimits;
 
 /**
  * Loads the demo library through the ordinary import path: the generated files are written to a
- * temporary folder, checked and planned like any user file, and stored in one transaction. Files
- * already loaded (same checksum) are skipped, so loading twice changes nothing.
+ * temporary folder, checked and planned like any user file, and stored in one transaction; then
+ * each new demo grade gets its invented price by an ordinary edit. Files already loaded (same
+ * checksum) are skipped and edited grades are left alone, so loading twice changes nothing.
  */
 public final class DemoLoader {
 
@@ -41,12 +43,23 @@ public final class DemoLoader {
             if (!batches.isEmpty()) {
                 library.writer().importBatches(batches);
             }
+            setPrices(library);
             return plans;
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the demo files to a temporary folder", e);
         } finally {
             deleteQuietly(folder);
         }
+    }
+
+    /** Prices of demo grades that are as imported (version 1, no price). */
+    private static void setPrices(Library library) {
+        DemoLibrary.prices().forEach((name, price) -> library.reader().storedGrade(name)
+                .filter(stored -> stored.version() == 1 && stored.grade().price() == null)
+                .ifPresent(stored -> {
+                    GradeDetails details = GradeDetails.of(stored.grade());
+                    library.writer().editGrade(name, 1, new GradeDetails(details.supplier(), details.density(), details.notes(), price));
+                }));
     }
 
     private static void deleteQuietly(Path folder) {

@@ -31,7 +31,7 @@ public final class LibrarySelection {
         for (GradeSummary grade : reader.grades(family)) {
             try {
                 FittedTemperatureModel model = GradeCurves.temperatureModel(grade.name(), reader.curves(grade.name())).model();
-                RankedGrade row = GradeSelection.row(new GradeCandidate(grade.name(), model, null), requirements);
+                RankedGrade row = GradeSelection.row(new GradeCandidate(grade.name(), model, grade.price()), requirements);
                 assessed.add(new SelectionRow(grade.name(), grade.family(), row, null, extrapolated(model, requirements, row)));
             } catch (KneepointException e) {
                 notAssessable.add(new SelectionRow(grade.name(), grade.family(), null, e.getMessage(), false));

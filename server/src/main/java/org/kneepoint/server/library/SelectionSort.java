@@ -3,7 +3,7 @@ package org.kneepoint.server.library;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.select.RankingOrder;
 
-/** The words that choose a selection's order ({@code flux}, {@code margin}, {@code loss}, {@code temperature}) and their descriptions. */
+/** The words that choose a selection's order ({@code flux}, {@code margin}, {@code loss}, {@code temperature}, {@code price}) and their descriptions. */
 public final class SelectionSort {
 
     private SelectionSort() {
@@ -16,7 +16,8 @@ public final class SelectionSort {
             case "margin" -> RankingOrder.KNEE_MARGIN;
             case "loss" -> RankingOrder.IRREVERSIBLE_LOSS;
             case "temperature" -> RankingOrder.MAX_WORKING_TEMPERATURE;
-            default -> throw new BadInputException("sort must be flux, margin, loss or temperature, got '" + word + "'");
+            case "price" -> RankingOrder.PRICE;
+            default -> throw new BadInputException("sort must be flux, margin, loss, temperature or price, got '" + word + "'");
         };
     }
 
@@ -27,7 +28,7 @@ public final class SelectionSort {
             case KNEE_MARGIN -> "margin to the knee, largest first";
             case IRREVERSIBLE_LOSS -> "irreversible loss, smallest first";
             case MAX_WORKING_TEMPERATURE -> "maximum working temperature, highest first";
-            case PRICE -> "price, cheapest first";
+            case PRICE -> "price per kilogram, cheapest first (grades without a price last)";
         };
     }
 }

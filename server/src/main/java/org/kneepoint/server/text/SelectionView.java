@@ -34,6 +34,7 @@ public final class SelectionView {
             entry.put("irreversibleLossPercent", ranked == null ? null : JsonNumbers.finite(100.0 * ranked.irreversibleLoss()));
             entry.put("maxWorkingTemperatureK", ranked == null ? null : ranked.maxWorkingTemperature());
             entry.put("extrapolated", row.extrapolated());
+            entry.put("price", ranked == null ? null : ranked.price());
             json.add(entry);
         }
         return json;
@@ -66,8 +67,9 @@ public final class SelectionView {
         if (rows.isEmpty()) {
             out.append("  No grades in the library to select from.\n");
         }
-        String format = "  %-24s %-16s %-6s %-11s %-14s %-10s %-12s %-5s %s%n";
-        out.append(String.format(format, "grade", "family", "result", "B", "knee margin", "irr. loss", "max temp.", "extr.", "reasons"));
+        String format = "  %-24s %-16s %-6s %-11s %-14s %-10s %-12s %-9s %-5s %s%n";
+        out.append(String.format(format, "grade", "family", "result", "B", "knee margin", "irr. loss", "max temp.", "price/kg", "extr.",
+                "reasons"));
         boolean anyExtrapolated = false;
         for (SelectionRow row : rows) {
             anyExtrapolated |= row.extrapolated();
@@ -79,6 +81,7 @@ public final class SelectionView {
                     ranked == null ? "-" : value(ranked.irreversibleLoss(), EngineeringUnits.percent(ranked.irreversibleLoss())),
                     ranked == null || !Double.isFinite(ranked.fluxDensity()) ? "-" : ranked.maxWorkingTemperature() == null ? "none"
                             : EngineeringUnits.celsius(ranked.maxWorkingTemperature()),
+                    ranked == null || ranked.price() == null ? "-" : String.format(java.util.Locale.ROOT, "%.2f", ranked.price()),
                     row.extrapolated() ? "yes" : "no", PlainText.printable(String.join("; ", reasons(row, requirements)))));
         }
         out.append("  Passing grades first, each group sorted by ").append(sortedBy)

@@ -8,9 +8,9 @@ import org.kneepoint.fitter.library.GradeSummary;
 import org.kneepoint.server.text.Temperatures;
 
 /**
- * The Library page ({@code /}): every grade with its family, supplier, number of curves and the
+ * The Library page ({@code /}): every grade with its family, supplier, price, number of curves and the
  * temperatures they were taken at; a family filter and columns sorted on the server by
- * {@code ?sort=name|family|supplier|curves|temperature&order=asc|desc}.
+ * {@code ?sort=name|family|supplier|price|curves|temperature&order=asc|desc}.
  */
 final class LibraryPage {
 
@@ -18,11 +18,12 @@ final class LibraryPage {
             "name", Comparator.comparing(GradeSummary::name, String.CASE_INSENSITIVE_ORDER),
             "family", Comparator.comparing(GradeSummary::family, String.CASE_INSENSITIVE_ORDER),
             "supplier", Comparator.comparing(grade -> grade.supplier() == null ? "" : grade.supplier(), String.CASE_INSENSITIVE_ORDER),
+            "price", Comparator.comparing(GradeSummary::price, Comparator.nullsLast(Comparator.<Double>naturalOrder())),
             "curves", Comparator.comparingInt(GradeSummary::curves),
             "temperature", Comparator.comparingDouble(grade -> grade.temperaturesK().stream().mapToDouble(Double::doubleValue).max().orElse(0)));
 
     private static final String[][] COLUMNS = {
-        {"name", "Grade"}, {"family", "Family"}, {"supplier", "Supplier"}, {"curves", "Curves"}, {"temperature", "Temperatures"},
+        {"name", "Grade"}, {"family", "Family"}, {"supplier", "Supplier"}, {"price", "Price /kg"}, {"curves", "Curves"}, {"temperature", "Temperatures"},
     };
 
     private LibraryPage() {
@@ -52,6 +53,7 @@ final class LibraryPage {
                     .append(Layout.isDemo(grade.name()) ? " <span class=\"tag\">invented</span>" : "")
                     .append("</td><td>").append(Html.text(grade.family()))
                     .append("</td><td>").append(Html.text(grade.supplier()))
+                    .append("</td><td class=\"number\">").append(grade.price() == null ? "—" : String.format(java.util.Locale.ROOT, "%.2f", grade.price()))
                     .append("</td><td class=\"number\">").append(grade.curves())
                     .append("</td><td>").append(Html.text(Temperatures.list(grade.temperaturesK()))).append("</td></tr>");
         }

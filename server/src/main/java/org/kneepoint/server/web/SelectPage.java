@@ -35,7 +35,7 @@ final class SelectPage {
                 .append(FormFields.choice(values, "family", "family", families))
                 .append(FormFields.choice(values, "sort", "order", List.of(new String[] {"flux", "flux density"},
                         new String[] {"margin", "margin to the knee"}, new String[] {"loss", "irreversible loss"},
-                        new String[] {"temperature", "maximum working temperature"})))
+                        new String[] {"temperature", "maximum working temperature"}, new String[] {"price", "price, cheapest first"})))
                 .append("</div></fieldset><button type=\"submit\" class=\"primary\">Rank the grades</button></form>");
         if (run != null) {
             out.append(results(run));
@@ -50,7 +50,7 @@ final class SelectPage {
             return out.append("<p class=\"empty\">No grades in the library to select from.</p>").toString();
         }
         out.append("<table class=\"ranking\"><thead><tr><th>Grade</th><th>Family</th><th>Result</th><th>B (T)</th>"
-                + "<th>Knee margin (kA/m)</th><th>Irreversible loss (%)</th><th>Max. temperature</th><th>Extrapolated</th>"
+                + "<th>Knee margin (kA/m)</th><th>Irreversible loss (%)</th><th>Max. temperature</th><th>Price /kg</th><th>Extrapolated</th>"
                 + "<th>Reasons</th></tr></thead><tbody>");
         boolean anyExtrapolated = false;
         for (SelectionRow row : run.rows()) {
@@ -63,7 +63,9 @@ final class SelectPage {
                     .append(number(ranked == null ? Double.NaN : ranked.fluxDensity(), "%.4f", 1))
                     .append(number(ranked == null ? Double.NaN : ranked.kneeMarginField(), "%.1f", 1000))
                     .append(number(ranked == null ? Double.NaN : 100 * ranked.irreversibleLoss(), "%.2f", 1))
-                    .append("<td>").append(maximum(ranked)).append("</td><td>").append(row.extrapolated() ? "yes" : "no")
+                    .append("<td>").append(maximum(ranked)).append("</td>")
+                    .append(number(ranked == null || ranked.price() == null ? Double.NaN : ranked.price(), "%.2f", 1))
+                    .append("<td>").append(row.extrapolated() ? "yes" : "no")
                     .append("</td><td>").append(Html.text(String.join("; ", SelectionView.reasons(row, run.requirements()))))
                     .append("</td></tr>");
         }

@@ -19,6 +19,7 @@ import org.kneepoint.server.http.DesignRequests;
 import org.kneepoint.server.http.ErrorStatus;
 import org.kneepoint.server.http.FieldRequest;
 import org.kneepoint.server.http.JobRegistry;
+import org.kneepoint.server.http.GradeEditRequests;
 import org.kneepoint.server.http.JobRequests;
 import org.kneepoint.server.http.JobStatus;
 import org.kneepoint.server.http.DesignRequests.CheckRun;
@@ -54,6 +55,10 @@ final class WebPages {
         config.routes.get("/", context -> html(context, LibraryPage.render(library.reader(), blankToNull(context.queryParam("family")),
                 context.queryParam("sort"), context.queryParam("order"))));
         config.routes.get("/grades/{name}", context -> html(context, GradePage.render(library.reader(), context.pathParam("name"), tokenRequired, demoPresent())));
+        config.routes.post("/grades/{name}/details", context -> {
+            GradeEditRequests.fromForm(context, library);
+            context.redirect("/grades/" + Html.pathSegment(context.pathParam("name")), HttpStatus.SEE_OTHER);
+        });
         config.routes.get("/charts/grades/{name}.svg", context -> {
             String name = context.pathParam("name");
             String svg = GradeChart.svg(name, GradeCurves.stored(library.reader(), name), CHART_WIDTH, CHART_HEIGHT);
