@@ -11,6 +11,7 @@ import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
@@ -19,7 +20,8 @@ import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.kneepoint.fitter.model.ja.FitStage;
+import org.kneepoint.server.http.JobKind;
+import org.kneepoint.server.http.JobProgress;
 import org.kneepoint.server.http.JobRegistry;
 
 /** Background jobs: a Jiles–Atherton fit started over HTTP, its status, its page, and the bounds of the queue. */
@@ -82,14 +84,14 @@ class JobsTest {
         CountDownLatch release = new CountDownLatch(1);
         JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
         try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
-            Optional<String> running = jobs.submit(progress -> {
-                progress.report(0.5, FitStage.GLOBAL_SEARCH);
+            Optional<String> running = jobs.submit(JobKind.JA_FIT, progress -> {
+                progress.accept(new JobProgress(0.5, "global search", List.of()));
                 awaitQuietly(release);
                 return Map.of("finished", true);
             });
-            Optional<String> queued = jobs.submit(progress -> Map.of());
+            Optional<String> queued = jobs.submit(JobKind.JA_FIT, progress -> Map.of());
             assertTrue(running.isPresent() && queued.isPresent());
-            assertTrue(jobs.submit(progress -> Map.of()).isEmpty());
+            assertTrue(jobs.submit(JobKind.JA_FIT, progress -> Map.of()).isEmpty());
             HttpResponse<String> refused = post(server, "/api/jobs/ja-fit?grade=DEMO%20NdFeB%2042%2F100&temperature=20C&magnetizingField=3MA/m");
             assertEquals(429, refused.statusCode(), refused.body());
             String waiting = server.get("/jobs/" + queued.get()).body();
@@ -109,12 +111,12 @@ class JobsTest {
     void finished_jobs_are_forgotten_after_their_time_and_beyond_the_count() throws Exception {
         AtomicLong clock = new AtomicLong();
         try (JobRegistry jobs = new JobRegistry(1, 2, 2, Duration.ofMinutes(10), clock::get)) {
-            String first = jobs.submit(progress -> Map.of()).orElseThrow();
-            String second = jobs.submit(progress -> Map.of()).orElseThrow();
+            String first = jobs.submit(JobKind.JA_FIT, progress -> Map.of()).orElseThrow();
+            String second = jobs.submit(JobKind.JA_FIT, progress -> Map.of()).orElseThrow();
             waitUntilDone(jobs, first);
             waitUntilDone(jobs, second);
             clock.set(Duration.ofMinutes(5).toNanos());
-            String third = jobs.submit(progress -> Map.of()).orElseThrow();
+            String third = jobs.submit(JobKind.JA_FIT, progress -> Map.of()).orElseThrow();
             assertTrue(jobs.status(first).isEmpty(), "the oldest finished job makes room for a new one");
             assertTrue(jobs.status(second).isPresent());
             waitUntilDone(jobs, third);

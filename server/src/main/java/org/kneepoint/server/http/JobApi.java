@@ -1,7 +1,9 @@
 package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.NotFoundException;
@@ -27,9 +29,19 @@ final class JobApi {
         String id = context.pathParam("id");
         JobStatus status = jobs.status(id).orElseThrow(() -> new NotFoundException("no job with id '" + id + "' (jobs are kept for a while only)"));
         Map<String, Object> body = new LinkedHashMap<>();
+        body.put("kind", status.kind().key());
         body.put("state", status.state().name().toLowerCase());
-        body.put("fraction", status.fraction());
-        body.put("stage", status.stage());
+        body.put("fraction", status.progress().fraction());
+        body.put("stage", status.progress().stage());
+        List<Map<String, Object>> counts = new ArrayList<>();
+        for (JobProgress.Count count : status.progress().counts()) {
+            Map<String, Object> item = new LinkedHashMap<>();
+            item.put("name", count.name());
+            item.put("done", count.done());
+            item.put("total", count.total());
+            counts.add(item);
+        }
+        body.put("counts", counts);
         if (status.state() == JobStatus.State.DONE) {
             body.put("result", status.result());
         } else if (status.state() == JobStatus.State.FAILED) {

@@ -1,8 +1,11 @@
 package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
+import java.util.List;
+import java.util.Locale;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.NotFoundException;
+import org.kneepoint.fitter.model.ja.FitStage;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.server.library.JilesAthertonFitData;
 import org.kneepoint.server.library.JilesAthertonFitRun;
@@ -26,7 +29,16 @@ public final class JobRequests {
             throw new NotFoundException("no grade named '" + grade + "' in the library");
         }
         JilesAthertonFitData data = JilesAthertonFitData.fromGrade(library.reader(), grade, temperatureK, magnetizingField);
-        return jobs.submit(progress -> JilesAthertonFitRun.json(data, JilesAthertonFitRun.fit(data, progress), false))
-                .orElseThrow(() -> new RequestRefused(429, "BUSY", "the server is busy with other jobs; try again in a while"));
+        return jobs.submit(JobKind.JA_FIT, progress -> JilesAthertonFitRun.json(data, JilesAthertonFitRun.fit(data, (fraction, stage) ->
+                progress.accept(new JobProgress(Math.min(Math.max(fraction, 0), 1), words(stage), List.of()))), false)).orElseThrow(JobRequests::busy);
+    }
+
+    private static RequestRefused busy() {
+        return new RequestRefused(429, "BUSY", "the server is busy with other jobs; try again in a while");
+    }
+
+    /** A fit stage as the words shown to people, e.g. "global search". */
+    private static String words(FitStage stage) {
+        return stage.name().toLowerCase(Locale.ROOT).replace('_', ' ');
     }
 }
