@@ -8,7 +8,10 @@ import java.util.Map;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.NotFoundException;
 
-/** {@code POST /api/jobs/ja-fit} starts a fit in the background; {@code GET /api/jobs/{id}} tells how it is going. */
+/**
+ * {@code POST /api/jobs/ja-fit} and {@code POST /api/jobs/import} start a fit or an import in the
+ * background; {@code GET /api/jobs/{id}} tells how it is going.
+ */
 final class JobApi {
 
     private final Library library;
@@ -20,9 +23,21 @@ final class JobApi {
     }
 
     void jilesAthertonFit(Context context) {
-        String id = JobRequests.jilesAthertonFit(context, library, jobs);
+        started(context, JobRequests.jilesAthertonFit(context, library, jobs));
+    }
+
+    void importFiles(Context context) {
+        started(context, JobRequests.importFiles(library, Uploads.of(context), jobs));
+    }
+
+    /** 202 Accepted with the job's id, its status route (also as Location) and its page. */
+    private static void started(Context context, String id) {
         context.status(202).header("Location", "/api/jobs/" + id);
-        LibraryApi.json(context, Map.of("id", id, "status", "/api/jobs/" + id));
+        Map<String, Object> body = new LinkedHashMap<>();
+        body.put("id", id);
+        body.put("status", "/api/jobs/" + id);
+        body.put("page", "/jobs/" + id);
+        LibraryApi.json(context, body);
     }
 
     void job(Context context) {
