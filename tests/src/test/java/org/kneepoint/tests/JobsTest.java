@@ -45,11 +45,14 @@ class JobsTest {
             assertEquals(202, started.statusCode(), started.body());
             String id = RunningServer.json(started).get("id").asText();
             assertEquals("/api/jobs/" + id, RunningServer.json(started).get("status").asText());
+            assertEquals("/jobs/" + id, RunningServer.json(started).get("page").asText());
             JsonNode operation = RunningServer.json(server.get("/api/openapi.json")).get("paths").get("/api/jobs/ja-fit").get("post");
             assertTrue(operation.get("responses").has("202") && !operation.has("requestBody"), operation.toString());
             JsonNode status = waitUntilEnded(server, id);
             assertEquals("done", status.get("state").asText(), status.toString());
             assertEquals(expected, status.get("result"));
+            assertEquals("ja-fit", status.get("kind").asText());
+            assertEquals(0, status.get("counts").size());
             HttpResponse<String> page = server.get("/jobs/" + id);
             assertEquals(200, page.statusCode());
             assertFalse(page.body().contains("http-equiv=\"refresh\""));
