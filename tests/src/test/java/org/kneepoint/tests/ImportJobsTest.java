@@ -151,6 +151,7 @@ class ImportJobsTest {
             assertEquals("failed", status.get("state").asText(), status.toString());
             String message = status.get("error").asText();
             assertTrue(message.startsWith("broken.csv, line 6, column 2") && !message.contains("\n"), message);
+            assertEquals("BAD_INPUT", status.get("errorCode").asText());
             assertFalse(status.has("result"));
             assertEquals(before, server.rowCounts());
             String page = server.get("/jobs/" + id).body();
@@ -171,6 +172,8 @@ class ImportJobsTest {
             JsonNode status = waitUntilEnded(server, RunningServer.json(started).get("id").asText());
             assertEquals("failed", status.get("state").asText(), status.toString());
             assertTrue(status.get("error").asText().contains("grade 'DEMO NdFeB 42/100' is stored as family"), status.toString());
+            assertEquals("CONFLICT", status.get("errorCode").asText());
+            assertTrue(server.get("/jobs/" + RunningServer.json(started).get("id").asText()).body().contains("Nothing was imported."));
             assertEquals("storing everything in one transaction", status.get("stage").asText());
             assertEquals(before, server.rowCounts());
             assertEquals(404, server.get("/api/grades/Invented%20New").statusCode());
@@ -242,6 +245,23 @@ class ImportJobsTest {
             assertNull(status.get("counts").get(1).get("total").numberValue(), "the number of curves is not known before every file is read");
         } finally {
             release.countDown();
+        }
+    }
+
+    @Test
+    void an_import_job_broken_by_an_internal_error_does_not_claim_that_nothing_was_stored() throws Exception {
+        JobRegistry jobs = JobRegistry.standard();
+        try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
+            String id = jobs.submit(JobKind.IMPORT, progress -> {
+                throw new IllegalStateException("the database went away");
+            }).orElseThrow();
+            JsonNode status = waitUntilEnded(server, id);
+            assertEquals("failed", status.get("state").asText());
+            assertEquals("INTERNAL", status.get("errorCode").asText());
+            assertEquals("internal error; the server log has the details", status.get("error").asText());
+            String page = server.get("/jobs/" + id).body();
+            assertTrue(page.contains("The import failed; look at the library before importing these files again."), page);
+            assertFalse(page.contains("Nothing was imported") || page.contains("went away"), page);
         }
     }
 

@@ -60,7 +60,8 @@ final class JobApi {
         if (status.state() == JobStatus.State.DONE) {
             body.put("result", status.result());
         } else if (status.state() == JobStatus.State.FAILED) {
-            body.put("error", status.error());
+            body.put("error", status.failure().message());
+            body.put("errorCode", status.failure().code());
         }
         LibraryApi.json(context, body);
     }

@@ -130,10 +130,11 @@ public final class JobRegistry implements AutoCloseable {
                 Map<String, Object> result = work.run(progress -> status = new JobStatus(kind, JobStatus.State.RUNNING, progress, null, null));
                 finish(new JobStatus(kind, JobStatus.State.DONE, status.progress().finished(), result, null));
             } catch (KneepointException e) {
-                finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null, e.getMessage()));
+                finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null, new JobStatus.Failure(e.code().name(), e.getMessage())));
             } catch (RuntimeException e) {
                 LOG.error("job failed", e);
-                finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null, "internal error; the server log has the details"));
+                finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null,
+                        new JobStatus.Failure(JobStatus.INTERNAL, "internal error; the server log has the details")));
             }
         }
 

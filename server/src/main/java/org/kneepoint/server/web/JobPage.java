@@ -29,14 +29,25 @@ final class JobPage {
                     .append(counts(progress));
             case DONE -> out.append(counts(progress)).append(status.kind() == JobKind.IMPORT
                     ? ImportJobResult.render(status.result()) : FitJobResult.render(status.result()));
-            case FAILED -> out.append("<div class=\"problem\" role=\"alert\">")
-                    .append(status.kind() == JobKind.IMPORT ? "<strong>Nothing was imported.</strong> " : "")
-                    .append(Html.text(status.error())).append("</div>").append(counts(progress));
+            case FAILED -> out.append("<div class=\"problem\" role=\"alert\">").append(failureLead(status))
+                    .append(Html.text(status.failure().message())).append("</div>").append(counts(progress));
         }
         if (status.pending()) {
             out.append("<p class=\"hint\">This page reloads itself every second; it can be left and bookmarked, the job goes on.</p>");
         }
         return Layout.page(title, status.kind() == JobKind.IMPORT ? "Import" : "Library", out.toString(), demoPresent, status.pending());
+    }
+
+    /**
+     * What a failed import left behind: nothing, for the program's own errors (the import is one
+     * transaction); after an internal error that is not vouched for.
+     */
+    private static String failureLead(JobStatus status) {
+        if (status.kind() != JobKind.IMPORT) {
+            return "";
+        }
+        return status.failure().internal() ? "<strong>The import failed; look at the library before importing these files again.</strong> "
+                : "<strong>Nothing was imported.</strong> ";
     }
 
     private static String title(JobKind kind) {
