@@ -11,6 +11,8 @@ import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -18,11 +20,13 @@ import java.util.Optional;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Consumer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.server.http.JobKind;
 import org.kneepoint.server.http.JobProgress;
 import org.kneepoint.server.http.JobRegistry;
+import org.kneepoint.server.http.JobWork;
 
 /** Background jobs: a Jiles–Atherton fit started over HTTP, its status, its page, and the bounds of the queue. */
 class JobsTest {
@@ -126,6 +130,41 @@ class JobsTest {
             clock.set(Duration.ofMinutes(12).toNanos());
             assertTrue(jobs.status(second).isEmpty() && jobs.status(third).isPresent(), "kept ten minutes after it finished");
         }
+    }
+
+    @Test
+    void work_refused_or_still_waiting_when_the_registry_closes_is_discarded() {
+        CountDownLatch release = new CountDownLatch(1);
+        List<String> discarded = Collections.synchronizedList(new ArrayList<>());
+        JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
+        try {
+            assertTrue(jobs.submit(JobKind.JA_FIT, progress -> {
+                awaitQuietly(release);
+                return Map.of();
+            }).isPresent());
+            assertTrue(jobs.submit(JobKind.IMPORT, discardable("waiting", discarded)).isPresent());
+            assertTrue(jobs.submit(JobKind.IMPORT, discardable("refused", discarded)).isEmpty());
+            assertEquals(List.of("refused"), discarded);
+            jobs.close();
+            assertEquals(List.of("refused", "waiting"), discarded);
+        } finally {
+            release.countDown();
+            jobs.close();
+        }
+    }
+
+    private static JobWork discardable(String name, List<String> discarded) {
+        return new JobWork() {
+            @Override
+            public Map<String, Object> run(Consumer<JobProgress> progress) {
+                return Map.of();
+            }
+
+            @Override
+            public void discard() {
+                discarded.add(name);
+            }
+        };
     }
 
     private static void waitUntilDone(JobRegistry jobs, String id) throws InterruptedException {

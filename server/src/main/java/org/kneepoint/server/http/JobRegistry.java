@@ -98,14 +98,17 @@ public final class JobRegistry implements AutoCloseable {
     @Override
     public void close() {
         for (Runnable waiting : executor.shutdownNow()) {
-            ((Job) waiting).work.discard();
+            ((Job) waiting).discard();
         }
     }
 
-    /** One job: its work, run on the worker, and its latest status, written by the worker and read by requests. */
+    /**
+     * One job: its work, run on the worker (and let go of once run, so that a kept job does not
+     * hold its data), and its latest status, written by the worker and read by requests.
+     */
     private final class Job implements Runnable {
 
-        private final JobWork work;
+        private volatile JobWork work;
         private volatile JobStatus status;
         private volatile long finishedAt;
 
@@ -122,12 +125,18 @@ public final class JobRegistry implements AutoCloseable {
             return finishedAt;
         }
 
+        void discard() {
+            work.discard();
+        }
+
         @Override
         public void run() {
             JobKind kind = status.kind();
+            JobWork running = work;
+            work = null;
             status = new JobStatus(kind, JobStatus.State.RUNNING, JobProgress.NONE, null, null);
             try {
-                Map<String, Object> result = work.run(progress -> status = new JobStatus(kind, JobStatus.State.RUNNING, progress, null, null));
+                Map<String, Object> result = running.run(progress -> status = new JobStatus(kind, JobStatus.State.RUNNING, progress, null, null));
                 finish(new JobStatus(kind, JobStatus.State.DONE, status.progress().finished(), result, null));
             } catch (KneepointException e) {
                 finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null, new JobStatus.Failure(e.code().name(), e.getMessage())));
