@@ -3,6 +3,7 @@ package org.kneepoint.tests;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -28,6 +29,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.db.DatabaseLocation;
 import org.kneepoint.db.Library;
+import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.http.ImportJob;
 import org.kneepoint.server.http.JobKind;
@@ -132,6 +134,28 @@ class ImportJobsTest {
         ImportStep last = steps.get(steps.size() - 1);
         assertEquals(List.of(3, 3, 4, 4), List.of(last.filesChecked(), last.files(), last.curvesChecked(), last.curvesFound()));
         assertTrue(last.everyFileChecked() && !steps.get(steps.size() - 3).everyFileChecked());
+    }
+
+    @Test
+    void a_file_imported_by_someone_else_between_the_check_and_the_storing_fails_the_import_and_stores_none_of_its_files() throws Exception {
+        Path files = Files.createDirectories(folder.resolve("files"));
+        List<Path> paths = new ArrayList<>();
+        for (Map.Entry<String, String> file : threeExamples().entrySet()) {
+            paths.add(Files.writeString(files.resolve(file.getKey()), file.getValue()));
+        }
+        try (Library library = Library.open(DatabaseLocation.ofFolder(folder.resolve("library")))) {
+            Map<String, Integer> empty = library.reader().rowCounts();
+            ConflictException conflict = assertThrows(ConflictException.class, () -> ImportRun.run(library, ReadLimits.defaults(), paths, false,
+                    step -> {
+                        if (step.stage() == ImportStep.Stage.STORING) {
+                            ImportRun.run(library, ReadLimits.defaults(), List.of(paths.get(1)), false);
+                        }
+                    }));
+            assertEquals("the file n40sh-20C.csv was already imported (same SHA-256)", conflict.getMessage());
+            assertTrue(library.reader().grade("Invented N40SH").isPresent());
+            assertTrue(library.reader().grade("Invented N42H").isEmpty());
+            assertEquals(empty.get("curve") + 1, library.reader().rowCounts().get("curve"));
+        }
     }
 
     @Test
