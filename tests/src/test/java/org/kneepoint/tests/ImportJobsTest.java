@@ -3,7 +3,6 @@ package org.kneepoint.tests;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNull;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -15,7 +14,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -27,17 +25,12 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.kneepoint.db.DatabaseLocation;
-import org.kneepoint.db.Library;
-import org.kneepoint.fitter.error.ConflictException;
-import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.http.ImportJob;
 import org.kneepoint.server.http.JobKind;
 import org.kneepoint.server.http.JobRegistry;
-import org.kneepoint.server.library.ImportRun;
 import org.kneepoint.server.library.ImportStep;
 
-/** Imports as background jobs: the route, the steps reported, failures inside the job, and the Import page's background commit. */
+/** Imports as background jobs: the route, its progress, failures inside the job, and the Import page's background commit. */
 class ImportJobsTest {
 
     private static final String SCRIPT = "<script>alert(1)</script>";
@@ -52,7 +45,8 @@ class ImportJobsTest {
         return Files.readString(Path.of("..", "examples", name), StandardCharsets.UTF_8);
     }
 
-    private static Map<String, String> threeExamples() throws IOException {
+    /** Three example files: a grade at three temperatures, a grade at one, a susceptibility table. */
+    static Map<String, String> threeExamples() throws IOException {
         Map<String, String> files = new LinkedHashMap<>();
         files.put("three-temperatures.csv", example("invented-ndfeb-three-temperatures.csv"));
         files.put("n40sh-20C.csv", example("invented-sintered-ndfeb-20C.csv"));
@@ -108,53 +102,6 @@ class ImportJobsTest {
             }
         } finally {
             release.countDown();
-        }
-    }
-
-    @Test
-    void an_import_reports_each_file_read_validated_and_characterized_then_the_storing() throws Exception {
-        Path files = Files.createDirectories(folder.resolve("files"));
-        List<Path> paths = new ArrayList<>();
-        for (Map.Entry<String, String> file : threeExamples().entrySet()) {
-            paths.add(Files.writeString(files.resolve(file.getKey()), file.getValue()));
-        }
-        List<ImportStep> steps = new ArrayList<>();
-        try (Library library = Library.open(DatabaseLocation.ofFolder(folder.resolve("library")))) {
-            ImportRun.run(library, ReadLimits.defaults(), paths, false, steps::add);
-        }
-        List<String> seen = steps.stream().map(step -> step.stage() + " " + step.file() + " " + step.filesChecked()).toList();
-        assertEquals(List.of("READING three-temperatures.csv 0", "VALIDATING three-temperatures.csv 0",
-                "CHARACTERIZING three-temperatures.csv 0", "CHARACTERIZING three-temperatures.csv 0", "CHARACTERIZING three-temperatures.csv 0",
-                "CHARACTERIZING three-temperatures.csv 1", "READING n40sh-20C.csv 1", "VALIDATING n40sh-20C.csv 1",
-                "CHARACTERIZING n40sh-20C.csv 1", "CHARACTERIZING n40sh-20C.csv 2", "READING salt.csv 2", "VALIDATING salt.csv 2",
-                "VALIDATING salt.csv 3", "STORING null 3"), seen);
-        for (int i = 1; i < steps.size(); i++) {
-            assertTrue(steps.get(i).curvesChecked() >= steps.get(i - 1).curvesChecked(), "curves checked never fall back");
-        }
-        ImportStep last = steps.get(steps.size() - 1);
-        assertEquals(List.of(3, 3, 4, 4), List.of(last.filesChecked(), last.files(), last.curvesChecked(), last.curvesFound()));
-        assertTrue(last.everyFileChecked() && !steps.get(steps.size() - 3).everyFileChecked());
-    }
-
-    @Test
-    void a_file_imported_by_someone_else_between_the_check_and_the_storing_fails_the_import_and_stores_none_of_its_files() throws Exception {
-        Path files = Files.createDirectories(folder.resolve("files"));
-        List<Path> paths = new ArrayList<>();
-        for (Map.Entry<String, String> file : threeExamples().entrySet()) {
-            paths.add(Files.writeString(files.resolve(file.getKey()), file.getValue()));
-        }
-        try (Library library = Library.open(DatabaseLocation.ofFolder(folder.resolve("library")))) {
-            Map<String, Integer> empty = library.reader().rowCounts();
-            ConflictException conflict = assertThrows(ConflictException.class, () -> ImportRun.run(library, ReadLimits.defaults(), paths, false,
-                    step -> {
-                        if (step.stage() == ImportStep.Stage.STORING) {
-                            ImportRun.run(library, ReadLimits.defaults(), List.of(paths.get(1)), false);
-                        }
-                    }));
-            assertEquals("the file n40sh-20C.csv was already imported (same SHA-256)", conflict.getMessage());
-            assertTrue(library.reader().grade("Invented N40SH").isPresent());
-            assertTrue(library.reader().grade("Invented N42H").isEmpty());
-            assertEquals(empty.get("curve") + 1, library.reader().rowCounts().get("curve"));
         }
     }
 
