@@ -13,6 +13,7 @@ import org.kneepoint.db.Library;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.library.ImportPlan;
 import org.kneepoint.server.library.ImportPlanner;
+import org.kneepoint.server.library.ImportProgress;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -67,7 +68,7 @@ public class LibraryImportBenchmark {
 
     @Benchmark
     public int importMillionPoints() {
-        List<ImportPlan> plans = new ImportPlanner(ReadLimits.defaults(), library.reader()).plan(List.of(file), Instant.now());
+        List<ImportPlan> plans = new ImportPlanner(ReadLimits.defaults(), library.reader()).plan(List.of(file), Instant.now(), ImportProgress.ignore());
         library.writer().importBatches(plans.stream().map(ImportPlan::batch).toList());
         return plans.size();
     }

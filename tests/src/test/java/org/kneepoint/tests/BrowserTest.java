@@ -26,9 +26,9 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 
 /**
  * The pages in a real browser: Debian's headless Chromium driven by Debian's chromedriver (tests/run
- * installs both; nothing is downloaded). Opens every page, runs a check, uploads a file, checks that a
- * grade named {@code <script>alert(1)</script>} shows as text, and saves screenshots under
- * tests/target/screenshots.
+ * installs both; nothing is downloaded). Opens every page, runs a check, uploads a file (and one
+ * in the background), checks that a grade named {@code <script>alert(1)</script>} shows as text,
+ * and saves screenshots under tests/target/screenshots.
  */
 class BrowserTest {
 
@@ -133,6 +133,25 @@ class BrowserTest {
         open("/select");
         assertTrue(browser.getPageSource().contains("Rank the grades"));
         screenshot("select");
+    }
+
+    @Test
+    void a_file_imported_in_the_background_ends_on_its_job_page_with_a_link_to_its_grade() throws Exception {
+        Path file = folder.resolve("background.csv");
+        Files.writeString(file, "# grade: Invented background grade\n# family: invented family\n# temperature: 20 °C\n"
+                + "H [kA/m],J [T]\n50,1.2913\n0,1.2888\n-400,1.2636\n-800,1.2382\n-1100,1.1871\n-1300,0.9\n-1400,0.2\n-1500,0\n");
+        open("/import");
+        browser.findElement(By.cssSelector("input[type=file]")).sendKeys(file.toAbsolutePath().toString());
+        browser.findElement(By.cssSelector("form.upload button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(15)).until(ExpectedConditions.presenceOfElementLocated(
+                By.xpath("//button[contains(., 'Import in the background')]"))).click();
+        new WebDriverWait(browser, Duration.ofSeconds(30)).until(ExpectedConditions.presenceOfElementLocated(
+                By.linkText("Invented background grade")));
+        assertTrue(browser.getCurrentUrl().matches(".*/jobs/[0-9a-f]{32}"), browser.getCurrentUrl());
+        assertTrue(browser.getPageSource().contains("files checked: 1 of 1"), "the counts stay on the finished job's page");
+        screenshot("import-job");
+        browser.findElement(By.linkText("Invented background grade")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(10)).until(ExpectedConditions.titleContains("Invented background grade"));
     }
 
     @Test

@@ -11,16 +11,22 @@ import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicLong;
+import java.util.function.Consumer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.kneepoint.fitter.model.ja.FitStage;
+import org.kneepoint.server.http.JobKind;
+import org.kneepoint.server.http.JobProgress;
 import org.kneepoint.server.http.JobRegistry;
+import org.kneepoint.server.http.JobWork;
 
 /** Background jobs: a Jiles–Atherton fit started over HTTP, its status, its page, and the bounds of the queue. */
 class JobsTest {
@@ -43,11 +49,14 @@ class JobsTest {
             assertEquals(202, started.statusCode(), started.body());
             String id = RunningServer.json(started).get("id").asText();
             assertEquals("/api/jobs/" + id, RunningServer.json(started).get("status").asText());
+            assertEquals("/jobs/" + id, RunningServer.json(started).get("page").asText());
             JsonNode operation = RunningServer.json(server.get("/api/openapi.json")).get("paths").get("/api/jobs/ja-fit").get("post");
             assertTrue(operation.get("responses").has("202") && !operation.has("requestBody"), operation.toString());
             JsonNode status = waitUntilEnded(server, id);
             assertEquals("done", status.get("state").asText(), status.toString());
             assertEquals(expected, status.get("result"));
+            assertEquals("ja-fit", status.get("kind").asText());
+            assertEquals(0, status.get("counts").size());
             HttpResponse<String> page = server.get("/jobs/" + id);
             assertEquals(200, page.statusCode());
             assertFalse(page.body().contains("http-equiv=\"refresh\""));
@@ -82,14 +91,14 @@ class JobsTest {
         CountDownLatch release = new CountDownLatch(1);
         JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
         try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
-            Optional<String> running = jobs.submit(progress -> {
-                progress.report(0.5, FitStage.GLOBAL_SEARCH);
+            Optional<String> running = jobs.submit(JobKind.JA_FIT, progress -> {
+                progress.accept(new JobProgress(0.5, "global search", List.of()));
                 awaitQuietly(release);
                 return Map.of("finished", true);
             });
-            Optional<String> queued = jobs.submit(progress -> Map.of());
+            Optional<String> queued = jobs.submit(JobKind.JA_FIT, progress -> Map.of());
             assertTrue(running.isPresent() && queued.isPresent());
-            assertTrue(jobs.submit(progress -> Map.of()).isEmpty());
+            assertTrue(jobs.submit(JobKind.JA_FIT, progress -> Map.of()).isEmpty());
             HttpResponse<String> refused = post(server, "/api/jobs/ja-fit?grade=DEMO%20NdFeB%2042%2F100&temperature=20C&magnetizingField=3MA/m");
             assertEquals(429, refused.statusCode(), refused.body());
             String waiting = server.get("/jobs/" + queued.get()).body();
@@ -109,18 +118,53 @@ class JobsTest {
     void finished_jobs_are_forgotten_after_their_time_and_beyond_the_count() throws Exception {
         AtomicLong clock = new AtomicLong();
         try (JobRegistry jobs = new JobRegistry(1, 2, 2, Duration.ofMinutes(10), clock::get)) {
-            String first = jobs.submit(progress -> Map.of()).orElseThrow();
-            String second = jobs.submit(progress -> Map.of()).orElseThrow();
+            String first = jobs.submit(JobKind.JA_FIT, progress -> Map.of()).orElseThrow();
+            String second = jobs.submit(JobKind.JA_FIT, progress -> Map.of()).orElseThrow();
             waitUntilDone(jobs, first);
             waitUntilDone(jobs, second);
             clock.set(Duration.ofMinutes(5).toNanos());
-            String third = jobs.submit(progress -> Map.of()).orElseThrow();
+            String third = jobs.submit(JobKind.JA_FIT, progress -> Map.of()).orElseThrow();
             assertTrue(jobs.status(first).isEmpty(), "the oldest finished job makes room for a new one");
             assertTrue(jobs.status(second).isPresent());
             waitUntilDone(jobs, third);
             clock.set(Duration.ofMinutes(12).toNanos());
             assertTrue(jobs.status(second).isEmpty() && jobs.status(third).isPresent(), "kept ten minutes after it finished");
         }
+    }
+
+    @Test
+    void work_refused_or_still_waiting_when_the_registry_closes_is_discarded() {
+        CountDownLatch release = new CountDownLatch(1);
+        List<String> discarded = Collections.synchronizedList(new ArrayList<>());
+        JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
+        try {
+            assertTrue(jobs.submit(JobKind.JA_FIT, progress -> {
+                awaitQuietly(release);
+                return Map.of();
+            }).isPresent());
+            assertTrue(jobs.submit(JobKind.IMPORT, discardable("waiting", discarded)).isPresent());
+            assertTrue(jobs.submit(JobKind.IMPORT, discardable("refused", discarded)).isEmpty());
+            assertEquals(List.of("refused"), discarded);
+            jobs.close();
+            assertEquals(List.of("refused", "waiting"), discarded);
+        } finally {
+            release.countDown();
+            jobs.close();
+        }
+    }
+
+    private static JobWork discardable(String name, List<String> discarded) {
+        return new JobWork() {
+            @Override
+            public Map<String, Object> run(Consumer<JobProgress> progress) {
+                return Map.of();
+            }
+
+            @Override
+            public void discard() {
+                discarded.add(name);
+            }
+        };
     }
 
     private static void waitUntilDone(JobRegistry jobs, String id) throws InterruptedException {

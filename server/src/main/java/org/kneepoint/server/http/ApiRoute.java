@@ -37,6 +37,11 @@ record ApiRoute(String method, String path, String summary, List<ApiParameter> p
         return new ApiRoute("post", path, summary, List.of(parameters), handler, 202, false);
     }
 
+    /** A POST of multipart files that starts a background job with them and answers 202 Accepted. */
+    static ApiRoute startUpload(String path, String summary, Handler handler, ApiParameter... parameters) {
+        return new ApiRoute("post", path, summary, List.of(parameters), handler, 202, true);
+    }
+
     /** A path or query parameter, with an example value. */
     record ApiParameter(String name, String in, boolean required, String description, String example) {
 

@@ -128,7 +128,9 @@ public final class HttpApi {
                         jobApi::jilesAthertonFit, ApiParameter.query("grade", true, "the grade's name", "Invented soft iron"),
                         ApiParameter.query("temperature", false, "which curve, when there are several", "20C"),
                         ApiParameter.query("magnetizingField", false, "field magnetized at, for a second-quadrant curve", "3MA/m")),
-                ApiRoute.get("/api/jobs/{id}", "a background job: state, fraction done, stage, result or error", jobApi::job,
+                ApiRoute.startUpload("/api/jobs/import", "start an import of uploaded files (one transaction) in the background",
+                        jobApi::importFiles),
+                ApiRoute.get("/api/jobs/{id}", "a background job: kind, state, fraction done, stage, counts, result or error", jobApi::job,
                         ApiParameter.path("id", "the job's id, as answered when it was started", "0123456789abcdef0123456789abcdef")));
     }
 }

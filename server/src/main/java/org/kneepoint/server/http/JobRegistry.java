@@ -11,10 +11,8 @@ import java.util.concurrent.ArrayBlockingQueue;
 import java.util.concurrent.RejectedExecutionException;
 import java.util.concurrent.ThreadPoolExecutor;
 import java.util.concurrent.TimeUnit;
-import java.util.function.Function;
 import java.util.function.LongSupplier;
 import org.kneepoint.fitter.error.KneepointException;
-import org.kneepoint.fitter.model.ja.FitProgress;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -54,23 +52,24 @@ public final class JobRegistry implements AutoCloseable {
         return new JobRegistry(1, 4, 100, Duration.ofDays(1), System::nanoTime);
     }
 
-    /** Queues the work and answers its id, or empty when the queue is full. */
-    public Optional<String> submit(Function<FitProgress, Map<String, Object>> work) {
+    /** Queues the work and answers its id, or empty when the queue is full (then the work is discarded). */
+    public Optional<String> submit(JobKind kind, JobWork work) {
         byte[] bytes = new byte[16];
         random.nextBytes(bytes);
         String id = HexFormat.of().formatHex(bytes);
-        Job job = new Job();
+        Job job = new Job(kind, work);
         synchronized (jobs) {
             forget(kept - 1);
             jobs.put(id, job);
         }
         try {
-            executor.execute(() -> run(job, work, clock));
+            executor.execute(job);
             return Optional.of(id);
         } catch (RejectedExecutionException e) {
             synchronized (jobs) {
                 jobs.remove(id);
             }
+            work.discard();
             return Optional.empty();
         }
     }
@@ -80,21 +79,6 @@ public final class JobRegistry implements AutoCloseable {
         synchronized (jobs) {
             forget(kept);
             return Optional.ofNullable(jobs.get(id)).map(Job::status);
-        }
-    }
-
-    private static void run(Job job, Function<FitProgress, Map<String, Object>> work, LongSupplier clock) {
-        job.update(new JobStatus(JobStatus.State.RUNNING, 0, null, null, null));
-        try {
-            Map<String, Object> result = work.apply((fraction, stage) ->
-                    job.update(new JobStatus(JobStatus.State.RUNNING, fraction, stage.name().toLowerCase(), null, null)));
-            job.finish(new JobStatus(JobStatus.State.DONE, 1, null, result, null), clock.getAsLong());
-        } catch (KneepointException e) {
-            job.finish(new JobStatus(JobStatus.State.FAILED, job.status().fraction(), null, null, e.getMessage()), clock.getAsLong());
-        } catch (RuntimeException e) {
-            LOG.error("job failed", e);
-            job.finish(new JobStatus(JobStatus.State.FAILED, job.status().fraction(), null, null,
-                    "internal error; the server log has the details"), clock.getAsLong());
         }
     }
 
@@ -110,16 +94,28 @@ public final class JobRegistry implements AutoCloseable {
         }
     }
 
+    /** Stops the worker and discards the work of the jobs still waiting. */
     @Override
     public void close() {
-        executor.shutdownNow();
+        for (Runnable waiting : executor.shutdownNow()) {
+            ((Job) waiting).discard();
+        }
     }
 
-    /** One job's latest status, written by its worker and read by requests. */
-    private static final class Job {
+    /**
+     * One job: its work, run on the worker (and let go of once run, so that a kept job does not
+     * hold its data), and its latest status, written by the worker and read by requests.
+     */
+    private final class Job implements Runnable {
 
-        private volatile JobStatus status = new JobStatus(JobStatus.State.QUEUED, 0, null, null, null);
+        private volatile JobWork work;
+        private volatile JobStatus status;
         private volatile long finishedAt;
+
+        Job(JobKind kind, JobWork work) {
+            this.work = work;
+            this.status = new JobStatus(kind, JobStatus.State.QUEUED, JobProgress.NONE, null, null);
+        }
 
         JobStatus status() {
             return status;
@@ -129,12 +125,30 @@ public final class JobRegistry implements AutoCloseable {
             return finishedAt;
         }
 
-        void update(JobStatus next) {
-            status = next;
+        void discard() {
+            work.discard();
         }
 
-        void finish(JobStatus last, long now) {
-            finishedAt = now;
+        @Override
+        public void run() {
+            JobKind kind = status.kind();
+            JobWork running = work;
+            work = null;
+            status = new JobStatus(kind, JobStatus.State.RUNNING, JobProgress.NONE, null, null);
+            try {
+                Map<String, Object> result = running.run(progress -> status = new JobStatus(kind, JobStatus.State.RUNNING, progress, null, null));
+                finish(new JobStatus(kind, JobStatus.State.DONE, status.progress().finished(), result, null));
+            } catch (KneepointException e) {
+                finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null, new JobStatus.Failure(e.code().name(), e.getMessage())));
+            } catch (RuntimeException e) {
+                LOG.error("job failed", e);
+                finish(new JobStatus(kind, JobStatus.State.FAILED, status.progress(), null,
+                        new JobStatus.Failure(JobStatus.INTERNAL, "internal error; the server log has the details")));
+            }
+        }
+
+        private void finish(JobStatus last) {
+            finishedAt = clock.getAsLong();
             status = last;
         }
     }

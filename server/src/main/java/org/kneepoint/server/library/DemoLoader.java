@@ -38,7 +38,7 @@ public final class DemoLoader {
                 Files.writeString(path, file.getValue(), StandardCharsets.UTF_8);
                 files.add(path);
             }
-            List<ImportPlan> plans = new ImportPlanner(ReadLimits.defaults(), library.reader()).plan(files, Instant.now());
+            List<ImportPlan> plans = new ImportPlanner(ReadLimits.defaults(), library.reader()).plan(files, Instant.now(), ImportProgress.ignore());
             List<ImportBatch> batches = plans.stream().filter(plan -> !plan.alreadyImported()).map(ImportPlan::batch).toList();
             if (!batches.isEmpty()) {
                 library.writer().importBatches(batches);

@@ -40,11 +40,14 @@ public final class ImportPlanner {
         this.library = library;
     }
 
-    public List<ImportPlan> plan(List<Path> files, Instant now) {
+    /** Plans every file in order, reporting each step to {@code progress}. */
+    public List<ImportPlan> plan(List<Path> files, Instant now, ImportProgress progress) {
+        Tally tally = new Tally(progress, files.size());
         List<ImportPlan> plans = new ArrayList<>();
         List<String> checksums = new ArrayList<>();
         for (Path file : files) {
             String name = file.getFileName().toString();
+            tally.at(ImportStep.Stage.READING, name);
             String sha = FileChecksum.sha256(file);
             Optional<ImportInfo> earlier = library.importWithChecksum(sha);
             if (earlier.isPresent()) {
@@ -52,23 +55,28 @@ public final class ImportPlanner {
             } else if (checksums.contains(sha)) {
                 throw new BadInputException(InputLocation.of(name), "the same content as another file of this import");
             } else {
-                plans.add(new ImportPlan(name, batch(file, sha, now), null));
+                plans.add(new ImportPlan(name, batch(file, sha, now, tally), null));
             }
             checksums.add(sha);
+            tally.fileChecked();
         }
         return plans;
     }
 
-    private ImportBatch batch(Path file, String sha, Instant now) {
+    private ImportBatch batch(Path file, String sha, Instant now, Tally tally) {
         if (SusceptibilityFileReader.isSusceptibilityTable(file)) {
-            return susceptibilityBatch(new SusceptibilityFileReader(limits).read(file), sha, now);
+            SusceptibilityTable table = new SusceptibilityFileReader(limits).read(file);
+            tally.now(ImportStep.Stage.VALIDATING);
+            return susceptibilityBatch(table, sha, now);
         }
         boolean json = file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".json");
         CurveFile curves = json ? new CurveJsonReader(limits).read(file) : new CurveFileReader(limits).read(file);
-        return curveBatch(curves, sha, now);
+        return curveBatch(curves, sha, now, tally);
     }
 
-    private static ImportBatch curveBatch(CurveFile file, String sha, Instant now) {
+    private static ImportBatch curveBatch(CurveFile file, String sha, Instant now, Tally tally) {
+        tally.curvesFound(file.curves().size());
+        tally.now(ImportStep.Stage.VALIDATING);
         CurveMetadata meta = file.metadata();
         InputLocation at = InputLocation.of(file.source());
         if (meta.grade() == null) {
@@ -77,21 +85,23 @@ public final class ImportPlanner {
         if (meta.family() == null) {
             throw new BadInputException(at, "no family; add a line '# family: NAME' (e.g. sintered NdFeB) before the header");
         }
+        if (file.curves().stream().anyMatch(curve -> curve.temperatureK() == null)) {
+            throw new BadInputException(at, "no temperature; add '# temperature: 20 °C' or a T column");
+        }
         String provenance = "imported from " + file.source() + " (SHA-256 " + sha + ") at " + now
                 + (meta.source() == null ? "" : "; source: " + meta.source());
         GradeInfo grade = named(at, () -> new GradeInfo(meta.grade(), meta.family(), meta.supplier(), meta.density(), meta.notes(), provenance));
         List<LibraryCurve> curves = new ArrayList<>();
         int points = 0;
         for (DemagnetizationCurve curve : file.curves()) {
-            if (curve.temperatureK() == null) {
-                throw new BadInputException(at, "no temperature; add '# temperature: 20 °C' or a T column");
-            }
+            tally.now(ImportStep.Stage.CHARACTERIZING);
             try {
                 CurveCharacterizer.characterize(curve);
             } catch (BadInputException e) {
                 throw new BadInputException(InputLocation.of(String.format(Locale.ROOT, "%s (curve at %.2f K)", file.source(),
                         curve.temperatureK())), e.getMessage());
             }
+            tally.curveChecked();
             curves.add(new LibraryCurve(grade.name(), curve, meta.source() == null ? file.source() : meta.source(), sha));
             points += curve.size();
         }
@@ -116,6 +126,50 @@ public final class ImportPlanner {
             return value.get();
         } catch (IllegalArgumentException e) {
             throw new BadInputException(at, e.getMessage());
+        }
+    }
+
+    /** The counts of one planning, reported as each step begins. */
+    private static final class Tally {
+
+        private final ImportProgress progress;
+        private final int files;
+        private ImportStep.Stage stage;
+        private String file;
+        private int filesChecked;
+        private int curvesChecked;
+        private int curvesFound;
+
+        Tally(ImportProgress progress, int files) {
+            this.progress = progress;
+            this.files = files;
+        }
+
+        void at(ImportStep.Stage next, String name) {
+            file = name;
+            now(next);
+        }
+
+        void now(ImportStep.Stage next) {
+            stage = next;
+            report();
+        }
+
+        void curvesFound(int count) {
+            curvesFound += count;
+        }
+
+        void curveChecked() {
+            curvesChecked++;
+        }
+
+        void fileChecked() {
+            filesChecked++;
+            report();
+        }
+
+        private void report() {
+            progress.report(new ImportStep(stage, file, filesChecked, files, curvesChecked, curvesFound));
         }
     }
 }

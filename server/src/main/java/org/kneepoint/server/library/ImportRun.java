@@ -17,10 +17,18 @@ public final class ImportRun {
     private ImportRun() {
     }
 
+    /** Runs the import without reporting its progress. */
     public static List<ImportPlan> run(Library library, ReadLimits limits, List<Path> files, boolean dryRun) {
-        List<ImportPlan> plans = new ImportPlanner(limits, library.reader()).plan(files, Instant.now());
+        return run(library, limits, files, dryRun, ImportProgress.ignore());
+    }
+
+    /** Runs the import, reporting each file's steps and then the storing to {@code progress}. */
+    public static List<ImportPlan> run(Library library, ReadLimits limits, List<Path> files, boolean dryRun, ImportProgress progress) {
+        List<ImportPlan> plans = new ImportPlanner(limits, library.reader()).plan(files, Instant.now(), progress);
         List<ImportBatch> batches = plans.stream().filter(plan -> !plan.alreadyImported()).map(ImportPlan::batch).toList();
         if (!dryRun && !batches.isEmpty()) {
+            int curves = batches.stream().mapToInt(batch -> batch.info().curves()).sum();
+            progress.report(new ImportStep(ImportStep.Stage.STORING, null, files.size(), files.size(), curves, curves));
             library.writer().importBatches(batches);
         }
         return plans;

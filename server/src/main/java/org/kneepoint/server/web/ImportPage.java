@@ -8,7 +8,8 @@ import org.kneepoint.server.text.Temperatures;
 
 /**
  * The Import page ({@code /import}): a form to upload curve files and susceptibility tables, the
- * preview of a dry run with its validation message, and the result of the import.
+ * preview of a dry run with its validation message, and the result of the import; the preview also
+ * offers to store the files in a background job ({@code /jobs/import}, answered by the job's page).
  */
 final class ImportPage {
 
@@ -31,7 +32,11 @@ final class ImportPage {
         if (plans.stream().anyMatch(plan -> !plan.alreadyImported())) {
             out.append("<form method=\"post\" action=\"/import/commit\"><input type=\"hidden\" name=\"staged\" value=\"")
                     .append(Html.text(staged)).append("\">").append(tokenField(tokenRequired))
-                    .append("<button type=\"submit\" class=\"primary\">Import these files</button> <a href=\"/import\">Start again</a></form>");
+                    .append("<button type=\"submit\" class=\"primary\">Import these files</button> ")
+                    .append("<button type=\"submit\" formaction=\"/jobs/import\">Import in the background</button> ")
+                    .append("<a href=\"/import\">Start again</a>")
+                    .append("<p class=\"hint\">For large uploads: in the background, a job page shows each file's progress ")
+                    .append("and can be left and come back to; it links to the imported grades when done.</p></form>");
         } else {
             out.append("<p>All these files are in the library already. <a href=\"/import\">Choose other files</a></p>");
         }

@@ -85,6 +85,7 @@ final class WebPages {
         config.routes.post("/import/commit", this::commit);
         config.routes.post("/jobs/ja-fit", context -> context.redirect("/jobs/" + JobRequests.jilesAthertonFit(context, library, jobs),
                 HttpStatus.SEE_OTHER));
+        config.routes.post("/jobs/import", this::commitInBackground);
         config.routes.get("/jobs/{id}", context -> {
             String id = context.pathParam("id");
             JobStatus status = jobs.status(id).orElseThrow(() -> new NotFoundException("no job with id '" + id
@@ -153,11 +154,8 @@ final class WebPages {
     }
 
     private void commit(Context context) {
-        Uploads uploads = staging.take(context.formParam("staged")).orElse(null);
+        Uploads uploads = staged(context);
         if (uploads == null) {
-            context.status(400);
-            html(context, ImportPage.refused("These files are no longer waiting (the server keeps only the last few checks); "
-                    + "choose them again.", tokenRequired, demoPresent()));
             return;
         }
         try (uploads) {
@@ -167,6 +165,25 @@ final class WebPages {
             context.status(400);
             html(context, ImportPage.refused(e.getMessage(), tokenRequired, demoPresent()));
         }
+    }
+
+    /** The checked files stored by a background job; answered by the job's page (303). */
+    private void commitInBackground(Context context) {
+        Uploads uploads = staged(context);
+        if (uploads != null) {
+            context.redirect("/jobs/" + JobRequests.importFiles(library, uploads, jobs), HttpStatus.SEE_OTHER);
+        }
+    }
+
+    /** The uploads waiting under the form's key, or null after answering 400 when they are no longer waiting. */
+    private Uploads staged(Context context) {
+        Uploads uploads = staging.take(context.formParam("staged")).orElse(null);
+        if (uploads == null) {
+            context.status(400);
+            html(context, ImportPage.refused("These files are no longer waiting (the server keeps only the last few checks); "
+                    + "choose them again.", tokenRequired, demoPresent()));
+        }
+        return uploads;
     }
 
     /** The page shown to a browser for a failed request. */
