@@ -1,13 +1,8 @@
 package org.kneepoint.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
-import java.sql.Connection;
-import java.sql.DriverManager;
-import java.sql.SQLException;
-import java.sql.Statement;
 import java.util.List;
 import java.util.UUID;
 import org.junit.jupiter.api.Test;
@@ -25,24 +20,14 @@ import org.kneepoint.server.library.DemoLoader;
  */
 class PostgresLibraryTest {
 
-    private static String freshSchemaUrl() throws SQLException {
-        String url = System.getenv("KNEEPOINT_TEST_POSTGRES_URL");
-        assertNotNull(url, "KNEEPOINT_TEST_POSTGRES_URL is not set: run the tests with tests/run, which starts PostgreSQL");
-        String schema = "kp_" + UUID.randomUUID().toString().replace("-", "");
-        try (Connection connection = DriverManager.getConnection(url); Statement statement = connection.createStatement()) {
-            statement.execute("CREATE SCHEMA " + schema);
-        }
-        return url + "&currentSchema=" + schema;
-    }
-
     @Test
-    void the_demo_library_backs_up_to_the_same_bytes_on_postgresql_as_on_h2() throws SQLException {
+    void the_demo_library_backs_up_to_the_same_bytes_on_postgresql_as_on_h2() {
         String h2Backup;
         try (Library h2 = Library.open(new DatabaseLocation("jdbc:h2:mem:kneepoint-" + UUID.randomUUID() + ";DB_CLOSE_DELAY=-1"))) {
             DemoLoader.load(h2);
             h2Backup = BackupCodec.write(h2.reader().snapshot());
         }
-        try (Library postgres = Library.open(new DatabaseLocation(freshSchemaUrl()))) {
+        try (Library postgres = Library.open(new DatabaseLocation(TestPostgres.freshSchemaUrl()))) {
             assertEquals(Library.SCHEMA_VERSION, postgres.schemaVersion());
             postgres.writer().restore(BackupCodec.read("backup", h2Backup));
             assertEquals(h2Backup, BackupCodec.write(postgres.reader().snapshot()));
@@ -52,8 +37,8 @@ class PostgresLibraryTest {
     }
 
     @Test
-    void hostile_strings_survive_postgresql_unchanged() throws SQLException {
-        try (Library postgres = Library.open(new DatabaseLocation(freshSchemaUrl()))) {
+    void hostile_strings_survive_postgresql_unchanged() {
+        try (Library postgres = Library.open(new DatabaseLocation(TestPostgres.freshSchemaUrl()))) {
             GradeInfo grade = new GradeInfo("'; DROP TABLE grade; -- <script>alert(1)</script> Ниодим 磁石", "invented family",
                     "tab\there", null, "line\nbreak", null);
             var curve = org.kneepoint.fitter.curve.DemagnetizationCurve.of(org.kneepoint.fitter.curve.Quantity.J,

@@ -36,6 +36,12 @@ final class RunningServer implements AutoCloseable {
         this.application = application;
     }
 
+    /** A server over the library at {@code location} (opened here, closed with the server), without a token. */
+    static RunningServer over(DatabaseLocation location) {
+        Library library = Library.open(location);
+        return new RunningServer(library, WebApplication.start(library, new ServerSettings(ServerSettings.LOOPBACK, 0, null)));
+    }
+
     /** The demo library in {@code folder}, served without a token, with the given job registry. */
     static RunningServer withJobs(Path folder, JobRegistry jobs) {
         Library library = Library.open(DatabaseLocation.ofFolder(folder.resolve("library")));

@@ -4,6 +4,7 @@ import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import org.kneepoint.fitter.error.ErrorCode;
 import org.kneepoint.fitter.error.KneepointException;
 import org.kneepoint.server.text.Json;
 import org.slf4j.Logger;
@@ -11,7 +12,8 @@ import org.slf4j.LoggerFactory;
 
 /**
  * The one place where the HTTP layer turns failures into responses: bad input 400, not found
- * 404, conflict 409, numerical failure 422, a refused write 401/403, a body over its limit 413,
+ * 404, conflict 409, numerical failure 422, the database unreachable 503 (with Retry-After), a
+ * refused write 401/403, a body over its limit 413,
  * anything else 500 with a generic message (the details go to the log, never to the client). The
  * body is {@code {"error": {"code": "BAD_INPUT", "message": "..."}}}, or an {@link ErrorPage} when
  * a browser asks for a page.
@@ -19,6 +21,8 @@ import org.slf4j.LoggerFactory;
 final class ErrorMapper {
 
     private static final Logger LOG = LoggerFactory.getLogger(ErrorMapper.class);
+    /** When a client may try again after the library's database was unreachable. */
+    private static final String RETRY_AFTER_SECONDS = "5";
 
     private ErrorMapper() {
     }
@@ -40,6 +44,9 @@ final class ErrorMapper {
     }
 
     private static void known(KneepointException error, Context context, ErrorPage page) {
+        if (error.code() == ErrorCode.UNAVAILABLE) {
+            context.header("Retry-After", RETRY_AFTER_SECONDS);
+        }
         respond(context, page, ErrorStatus.of(error), error.code().name(), error.getMessage());
     }
 
