@@ -29,7 +29,8 @@ import org.kneepoint.db.DatabaseLocation;
  * mode while the import is inside its transaction). The client gets a clear 503 naming the
  * database, requests meanwhile get the same, nothing of the import is left after the restart, and
  * the same server process works again once the database is back, without a restart of its own.
- * The test runs its own PostgreSQL server (tests/postgres), since it stops it.
+ * The test runs its own PostgreSQL server (tests/postgres), since it stops it, with durable commits
+ * (a crash must not lose what was committed before it, such as the library's tables).
  */
 class DatabaseOutageTest {
 
@@ -78,7 +79,7 @@ class DatabaseOutageTest {
 
     @Test
     void a_crash_of_the_database_mid_write_is_reported_leaves_nothing_and_the_server_recovers() throws Exception {
-        String serverUrl = postgres("start", serverFolder.toString(), Integer.toString(port));
+        String serverUrl = postgres("start", serverFolder.toString(), Integer.toString(port), "durable");
         String libraryUrl = TestPostgres.freshSchemaUrl(serverUrl);
         String file = Files.readString(LargeCurveFile.write(Files.createTempFile(serverFolder, "large", ".csv"), 4, 10_000));
         try (RunningServer server = RunningServer.over(new DatabaseLocation(libraryUrl))) {
@@ -112,7 +113,7 @@ class DatabaseOutageTest {
                 assertEquals(503, whileDown.statusCode(), whileDown.body());
                 assertEquals("UNAVAILABLE", RunningServer.json(whileDown).get("error").get("code").asText());
 
-                postgres("start", serverFolder.toString(), Integer.toString(port));
+                postgres("start", serverFolder.toString(), Integer.toString(port), "durable");
                 HttpResponse<String> back = server.get("/api/grades");
                 assertEquals(200, back.statusCode(), "the first request after the restart is served: " + back.body());
                 assertEquals(0, RunningServer.json(back).size(), back.body());

@@ -98,7 +98,7 @@ class HttpBadInputTest {
         "/api/check?diameter=10mm&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|length",
         "/api/check?diameter=10mm&length=5mm&factor=worst&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|factor",
         "/api/select?pc=2|temperature",
-        "/api/select?pc=2&temperature=100C&sort=price|sort",
+        "/api/select?pc=2&temperature=100C&sort=cost|sort",
         "/api/select?pc=2&temperature=100C&minFluxDensity=1kg|minFluxDensity",
         "/api/select?pc=2&temperature=100C&maxLoss=150%25|loss",
         "/api/field/cylinder?diameter=10mm&length=5mm&br=1.3T|at",
