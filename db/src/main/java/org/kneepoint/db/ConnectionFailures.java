@@ -72,7 +72,8 @@ final class ConnectionFailures implements ExecuteListener {
         return false;
     }
 
-    private static String reason(Throwable failure) {
+    /** The first line of the innermost cause's message: what the driver or server said. */
+    static String reason(Throwable failure) {
         Throwable root = failure;
         while (root.getCause() != null && root.getCause() != root) {
             root = root.getCause();

@@ -104,17 +104,7 @@ public final class Library implements AutoCloseable {
     private static RuntimeException openingFailure(DatabaseLocation location, RuntimeException failure) {
         RuntimeException translated = new ConnectionFailures(location).translate(failure);
         return translated instanceof UnavailableException ? translated
-                : new BadInputException("cannot open the library at " + location.describe() + ": " + firstLine(failure));
-    }
-
-    private static String firstLine(Throwable error) {
-        Throwable root = error;
-        while (root.getCause() != null && root.getCause() != root) {
-            root = root.getCause();
-        }
-        String message = String.valueOf(root.getMessage());
-        int newline = message.indexOf('\n');
-        return newline < 0 ? message : message.substring(0, newline);
+                : new BadInputException("cannot open the library at " + location.describe() + ": " + ConnectionFailures.reason(failure));
     }
 
     public DatabaseLocation location() {

@@ -14,14 +14,14 @@ import org.kneepoint.fitter.error.BadInputException;
 /** Choosing the library and its credentials: option, then environment, then the home folder; passwords never shown. */
 class DatabaseLocationTest {
 
-    private static final Path HOME = Path.of("/home/invented");
+    private static final Path HOME = Path.of("invented-home").toAbsolutePath();
 
     @Test
     void the_option_wins_then_the_environment_then_the_home_folder() {
         Map<String, String> environment = Map.of("KNEEPOINT_DB", "jdbc:postgresql://db.invented:5432/magnets");
         assertEquals("jdbc:h2:file:/tmp/lib/kneepoint", DatabaseLocation.resolve("/tmp/lib", environment, HOME).jdbcUrl());
         assertEquals("jdbc:postgresql://db.invented:5432/magnets", DatabaseLocation.resolve(null, environment, HOME).jdbcUrl());
-        assertEquals("jdbc:h2:file:/home/invented/.kneepoint/kneepoint", DatabaseLocation.resolve(" ", Map.of(), HOME).jdbcUrl());
+        assertEquals("jdbc:h2:file:" + HOME.resolve(".kneepoint").resolve("kneepoint"), DatabaseLocation.resolve(" ", Map.of(), HOME).jdbcUrl());
     }
 
     @Test

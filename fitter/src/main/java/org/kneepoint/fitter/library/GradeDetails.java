@@ -14,12 +14,8 @@ public record GradeDetails(String supplier, Double density, String notes, Double
     public GradeDetails {
         LibraryText.requireLength("supplier", supplier, LibraryText.MAX_SUPPLIER);
         LibraryText.requireLength("notes", notes, LibraryText.MAX_NOTES);
-        if (density != null && !(density > 0 && Double.isFinite(density))) {
-            throw new IllegalArgumentException("density must be positive and finite, got " + density);
-        }
-        if (price != null && !(price >= 0 && Double.isFinite(price))) {
-            throw new IllegalArgumentException("price must be zero or positive and finite, got " + price);
-        }
+        LibraryText.requireDensity(density);
+        LibraryText.requirePrice(price);
     }
 
     /** The details of a stored grade. */

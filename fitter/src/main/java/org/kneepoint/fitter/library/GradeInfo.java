@@ -22,11 +22,7 @@ public record GradeInfo(String name, String family, String supplier, Double dens
     public GradeInfo {
         LibraryText.requireName("grade name", name);
         LibraryText.requireName("family", family, LibraryText.MAX_FAMILY);
-        if (density != null && !(density > 0 && Double.isFinite(density))) {
-            throw new IllegalArgumentException("density must be positive and finite, got " + density);
-        }
-        if (price != null && !(price >= 0 && Double.isFinite(price))) {
-            throw new IllegalArgumentException("price must be zero or positive and finite, got " + price);
-        }
+        LibraryText.requireDensity(density);
+        LibraryText.requirePrice(price);
     }
 }

@@ -1,6 +1,6 @@
 package org.kneepoint.fitter.library;
 
-/** Limits on the names the library stores: not blank, and short enough for their database columns. */
+/** Limits on what the library stores: names not blank, texts short enough for their columns, densities and prices in range. */
 final class LibraryText {
 
     static final int MAX_NAME = 500;
@@ -26,6 +26,20 @@ final class LibraryText {
     static void requireLength(String what, String value, int maxLength) {
         if (value != null && value.length() > maxLength) {
             throw new IllegalArgumentException(what + " is " + value.length() + " characters long; at most " + maxLength + " are kept");
+        }
+    }
+
+    /** A density (may be null) that is positive and finite. */
+    static void requireDensity(Double density) {
+        if (density != null && !(density > 0 && Double.isFinite(density))) {
+            throw new IllegalArgumentException("density must be positive and finite, got " + density);
+        }
+    }
+
+    /** A price (may be null) that is zero or positive and finite. */
+    static void requirePrice(Double price) {
+        if (price != null && !(price >= 0 && Double.isFinite(price))) {
+            throw new IllegalArgumentException("price must be zero or positive and finite, got " + price);
         }
     }
 }
