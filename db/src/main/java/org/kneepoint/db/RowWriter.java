@@ -96,15 +96,15 @@ final class RowWriter {
                 .set(GRADE.ROW_VERSION, GRADE.ROW_VERSION.plus(1))
                 .where(GRADE.NAME.eq(name)).and(GRADE.ROW_VERSION.eq(expectedVersion))
                 .execute();
+        if (updated == 1) {
+            return expectedVersion + 1;
+        }
         Integer version = tx.select(GRADE.ROW_VERSION).from(GRADE).where(GRADE.NAME.eq(name)).fetchOne(GRADE.ROW_VERSION);
         if (version == null) {
             throw new NotFoundException("no grade named '" + name + "' in the library");
         }
-        if (updated == 0) {
-            throw new ConflictException("grade '" + name + "' was changed by someone else since version " + expectedVersion
-                    + " (it is now at version " + version + "); read it again and redo the edit");
-        }
-        return version;
+        throw new ConflictException("grade '" + name + "' was changed by someone else since version " + expectedVersion
+                + " (it is now at version " + version + "); read it again and redo the edit");
     }
 
     private long ensureFamily(String family) {

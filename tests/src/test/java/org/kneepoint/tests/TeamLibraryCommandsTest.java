@@ -88,7 +88,9 @@ class TeamLibraryCommandsTest {
                 "kneepoint: no grade named 'no such grade' in the library\n",
                 new String[] {"edit", "no such grade", "--price", "3"},
                 "kneepoint: nothing to change: give --supplier, --density, --notes or --price\n",
-                new String[] {"edit", "DEMO AlNiCo 8"});
+                new String[] {"edit", "DEMO AlNiCo 8"},
+                "kneepoint: grade details: supplier is 1001 characters long; at most 1000 are kept\n",
+                new String[] {"edit", "DEMO AlNiCo 8", "--supplier", "s".repeat(1001)});
         cases.forEach((message, args) -> {
             String before = CliRun.of("grades", "--json", "--db", db).out();
             String[] withDb = java.util.Arrays.copyOf(args, args.length + 2);

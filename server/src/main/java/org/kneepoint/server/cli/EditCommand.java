@@ -6,7 +6,6 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.StoredGrade;
 import org.kneepoint.server.library.GradeEdit;
@@ -70,10 +69,7 @@ final class EditCommand implements Callable<Integer> {
         }
         StoredGrade edited;
         try (Library library = libraryOption.open()) {
-            GradeEdit edit = new GradeEdit(changes, "--%s");
-            int from = version != null ? version : library.reader().storedGrade(grade)
-                    .orElseThrow(() -> new NotFoundException("no grade named '" + grade + "' in the library")).version();
-            edited = edit.applyTo(library, grade, from);
+            edited = new GradeEdit(changes, "--%s").applyTo(library, grade, version);
         }
         var out = spec.commandLine().getOut();
         out.println(json ? Json.write(GradeJson.details(edited)) : describe(edited));

@@ -8,6 +8,7 @@ import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.fitter.library.GradeDetails;
+import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.StoredGrade;
 import org.kneepoint.fitter.units.DecimalNumber;
 import org.kneepoint.fitter.units.Dimension;
@@ -38,13 +39,18 @@ public record GradeEdit(Map<String, String> changes, String place) {
         }
     }
 
-    /** Applies the edit to the grade as stored at {@code expectedVersion}; returns the grade after it. */
-    public StoredGrade applyTo(Library library, String grade, int expectedVersion) {
+    /**
+     * Applies the edit to the grade as stored at {@code expectedVersion} (null: at the version read
+     * now); returns the grade after it.
+     */
+    public StoredGrade applyTo(Library library, String grade, Integer expectedVersion) {
         StoredGrade stored = library.reader().storedGrade(grade)
                 .orElseThrow(() -> new NotFoundException("no grade named '" + grade + "' in the library"));
         GradeDetails details = changed(GradeDetails.of(stored.grade()));
-        library.writer().editGrade(grade, expectedVersion, details);
-        return library.reader().storedGrade(grade).orElseThrow();
+        int version = library.writer().editGrade(grade, expectedVersion != null ? expectedVersion : stored.version(), details);
+        GradeInfo before = stored.grade();
+        return new StoredGrade(new GradeInfo(before.name(), before.family(), details.supplier(), details.density(), details.notes(),
+                before.provenance(), details.price()), version);
     }
 
     /** The details with this edit's changes. */
