@@ -24,7 +24,11 @@ public final class CurveCharacterizer {
     }
 
     public static Characterization characterize(DemagnetizationCurve curve) {
-        DemagnetizationBranch branch = DemagnetizationBranch.of(curve);
+        return characterize(DemagnetizationBranch.of(curve), curve.temperatureK());
+    }
+
+    /** The characterization of a curve's branch already prepared (so a caller that needs the branch builds it once). */
+    public static Characterization characterize(DemagnetizationBranch branch, Double temperatureK) {
         requireSecondQuadrant(branch);
         double br = branch.j(0.0);
         if (!(br > 0)) {
@@ -42,7 +46,7 @@ public final class CurveCharacterizer {
                 maximum == null ? null : maximum.bh(),
                 maximum == null ? null : maximum.h(),
                 maximum == null ? null : maximum.b(),
-                hk, squareness, muRec, window, curve.temperatureK());
+                hk, squareness, muRec, window, temperatureK);
     }
 
     private static void requireSecondQuadrant(DemagnetizationBranch branch) {

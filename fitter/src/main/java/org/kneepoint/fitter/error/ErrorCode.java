@@ -10,6 +10,8 @@ public enum ErrorCode {
     CONFLICT,
     /** A computation failed to converge or left its domain. */
     NUMERICAL_FAILURE,
-    /** The library's database cannot be reached; nothing was written, the request may be retried. */
-    UNAVAILABLE
+    /** A service the program depends on (the library's database) cannot be reached; nothing was written, the request may be retried. */
+    UNAVAILABLE,
+    /** Stored data failed their checksum: the library is damaged where the message says; no value was given. */
+    DAMAGED
 }

@@ -10,8 +10,11 @@ import org.kneepoint.fitter.units.MagneticConstant;
 
 /**
  * The field of one uniformly magnetized magnet (magnetization along +z, origin at its centre), at
- * any point inside or outside. Implementations are immutable and safe to share between threads. On
- * edges and rims, where the exact field is infinite, the result is not finite.
+ * any point inside or outside. Implementations are immutable and safe to share between threads.
+ * Far away (beyond {@value MultipoleExpansion#SWITCH_RADII} radii of the enclosing sphere) the
+ * field is summed as a multipole expansion, which keeps full precision at any distance. On the
+ * sharp edges of the pole faces, where the exact field is infinite, {@link #fluxDensityInto} is not
+ * finite; {@link #sample} says so with a reason.
  */
 public interface MagnetField {
 
@@ -20,6 +23,28 @@ public interface MagnetField {
 
     /** Whether (x, y, z) lies inside the magnet material (the surface counts as outside). */
     boolean isInside(double x, double y, double z);
+
+    /**
+     * Why B is not defined at (x, y, z) — the point lies on a sharp edge of a pole face, within
+     * {@value #EDGE_TOLERANCE} of the magnet's size, where the field is infinite — or null.
+     */
+    String singularity(double x, double y, double z);
+
+    /** Points this close to an edge, relative to the magnet's enclosing radius, count as on it (rounding). */
+    double EDGE_TOLERANCE = 1e-12;
+
+    /** B at (x, y, z), or the reason it is not defined there; never a NaN or infinite component. */
+    default FieldSample sample(double x, double y, double z) {
+        String reason = singularity(x, y, z);
+        if (reason != null) {
+            return FieldSample.singular(reason);
+        }
+        FieldVector b = fluxDensity(x, y, z);
+        if (!(Double.isFinite(b.x()) && Double.isFinite(b.y()) && Double.isFinite(b.z()))) {
+            return FieldSample.singular("the field is not finite at this point (next to a sharp edge of a pole face)");
+        }
+        return FieldSample.of(b);
+    }
 
     /** Br = μ0·M in tesla. */
     double remanence();

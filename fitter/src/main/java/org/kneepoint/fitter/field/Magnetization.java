@@ -3,7 +3,7 @@ package org.kneepoint.fitter.field;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.units.MagneticConstant;
 
-/** Checks a remanence and converts it to the magnetization M = Br/μ0 (DESIGN §4). */
+/** Checks a remanence and converts it to the magnetization M = Br/μ0 (docs/design.md §4). */
 final class Magnetization {
 
     private Magnetization() {

@@ -82,4 +82,10 @@ public record SpheroidField(SpheroidShape shape, double remanence) implements Ma
         double atanh = 0.5 * Math.log1p(2.0 * f / (u - f));
         return 2.0 / (-e2) * (atanh / f - 1.0 / u);
     }
+
+    /** A spheroid has no edges: its field is finite everywhere. */
+    @Override
+    public String singularity(double x, double y, double z) {
+        return null;
+    }
 }

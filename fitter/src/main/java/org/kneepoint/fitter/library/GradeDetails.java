@@ -12,8 +12,6 @@ package org.kneepoint.fitter.library;
 public record GradeDetails(String supplier, Double density, String notes, Double price) {
 
     public GradeDetails {
-        LibraryText.requireLength("supplier", supplier, LibraryText.MAX_SUPPLIER);
-        LibraryText.requireLength("notes", notes, LibraryText.MAX_NOTES);
         LibraryText.requireDensity(density);
         LibraryText.requirePrice(price);
     }

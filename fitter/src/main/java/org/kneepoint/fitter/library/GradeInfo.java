@@ -21,7 +21,7 @@ public record GradeInfo(String name, String family, String supplier, Double dens
 
     public GradeInfo {
         LibraryText.requireName("grade name", name);
-        LibraryText.requireName("family", family, LibraryText.MAX_FAMILY);
+        LibraryText.requireName("family", family);
         LibraryText.requireDensity(density);
         LibraryText.requirePrice(price);
     }

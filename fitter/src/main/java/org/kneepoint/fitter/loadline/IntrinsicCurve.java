@@ -5,7 +5,7 @@ import java.util.OptionalDouble;
 /**
  * The intrinsic demagnetization curve J(H) of one grade at one temperature, in the second quadrant:
  * J in tesla non-decreasing in H (A/m, H ≤ 0), with its remanence and recoil permeability
- * (DESIGN §4). Implementations are immutable.
+ * (docs/design.md §4). Implementations are immutable.
  */
 public interface IntrinsicCurve {
 
@@ -23,4 +23,12 @@ public interface IntrinsicCurve {
 
     /** H of the operating point on the load line B = −μ0·Pc·(H + Ha). */
     double operatingField(double pc, double opposingField);
+
+    /**
+     * Whether J at {@code h} lies below the field range the curve was measured to, so that a fitted model stands in for
+     * the data there; a parametric curve has no measured range and never does.
+     */
+    default boolean beyondMeasuredField(double h) {
+        return false;
+    }
 }

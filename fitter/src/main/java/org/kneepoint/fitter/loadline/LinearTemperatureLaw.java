@@ -7,7 +7,7 @@ import org.kneepoint.fitter.error.BadInputException;
 /**
  * The linear temperature law: Br(T) = Br0·(1 + α·(T − T0)), HcJ(T) = HcJ0·(1 + β·(T − T0)), with μrec
  * and the knee's relative width w/HcJ held constant (the form of the Modelica FluxTubes HardMagnetic
- * records, Br(T) = BrRef·(1 + α·(T − Tref)); REFERENCES §6b). α and β are in 1/K. The model's range
+ * records, Br(T) = BrRef·(1 + α·(T − Tref)); docs/references.md §6b). α and β are in 1/K. The model's range
  * is where Br, HcJ and the recoil line's J at −HcJ all stay positive, within 1 K to T0 + 800 K (no
  * commercial magnet material keeps its magnetization that far: the Curie points of Sm2Co17 lie near
  * 800–850 °C; from memory).
@@ -20,7 +20,7 @@ import org.kneepoint.fitter.error.BadInputException;
 public record LinearTemperatureLaw(LinearRecoilKnee reference, double alpha, double beta, double referenceTemperature)
         implements TemperatureModel {
 
-    /** T0 when the data give none: 20 °C (DESIGN §4). */
+    /** T0 when the data give none: 20 °C (docs/design.md §4). */
     public static final double DEFAULT_REFERENCE_TEMPERATURE = 293.15;
 
     private static final double RANGE_MARGIN = 1e-6;

@@ -5,7 +5,7 @@ import static org.kneepoint.fitter.units.MagneticConstant.MU0;
 import org.kneepoint.fitter.error.BadInputException;
 
 /**
- * The load line B = −μ0·Pc·(H + Ha) (DESIGN §4): permeance coefficient Pc and an opposing field Ha ≥ 0
+ * The load line B = −μ0·Pc·(H + Ha) (docs/design.md §4): permeance coefficient Pc and an opposing field Ha ≥ 0
  * (A/m, pointing against the magnetization).
  *
  * @param pc            permeance coefficient, positive

@@ -10,12 +10,12 @@ import org.kneepoint.fitter.shape.RingShape;
 import org.kneepoint.fitter.shape.SpheroidShape;
 
 /**
- * The local check (DESIGN §2, workflow 3): beyond the single-Pc estimate, the demagnetizing field
+ * The local check (docs/design.md §2, workflow 3): beyond the single-Pc estimate, the demagnetizing field
  * varies through a non-ellipsoidal magnet. The magnet is taken as uniformly polarized at the
  * polarization J of its operating point; its internal field H(r) comes from the field solvers
  * (org.kneepoint.fitter.field, H = B/μ0 − M). Each cell's field is the single-Pc operating field plus
  * the cell's departure from the volume average, H_local = H_op + H_z(r) − ⟨H_z⟩, so the opposing field
- * enters as in the load line (DESIGN §4) and, with Pc from Nm and no opposing field, H_local = H_z(r)
+ * enters as in the load line (docs/design.md §4) and, with Pc from Nm and no opposing field, H_local = H_z(r)
  * (Nm is the volume average; Chen, Brug, Goldfarb 1991). A cell works below the knee where H_local &lt; H_knee. The bounding box is cut into n × n × n equal
  * cells (resolution: edge/n along each axis) and each cell is judged by its centre; the transverse
  * components of H and the non-uniform polarization they would cause are neglected (a first-order

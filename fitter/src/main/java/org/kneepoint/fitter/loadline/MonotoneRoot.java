@@ -1,16 +1,17 @@
 package org.kneepoint.fitter.loadline;
 
 import java.util.function.DoubleUnaryOperator;
+import org.hipparchus.analysis.solvers.BrentSolver;
 import org.kneepoint.fitter.error.NumericalFailureException;
 
 /**
- * The root of a non-decreasing function on a bracket [low, high] with f(low) ≤ 0 ≤ f(high), by the
- * Illinois variant of regula falsi (Dowell and Jarratt, BIT 11, 168, 1971), which keeps the bracket
- * and converges superlinearly; bisection takes over if a step stalls.
+ * The root of a non-decreasing function on a bracket [low, high] with f(low) ≤ 0 ≤ f(high), by
+ * Brent's method (R. P. Brent, Algorithms for Minimization without Derivatives, Prentice-Hall, 1973,
+ * ch. 4; Hipparchus 4.0.1 {@link BrentSolver}), the one bracketing root finder the physics uses.
  */
 final class MonotoneRoot {
 
-    private static final int MAX_ITERATIONS = 200;
+    private static final int MAX_EVALUATIONS = 200;
 
     private MonotoneRoot() {
     }
@@ -21,29 +22,13 @@ final class MonotoneRoot {
         if (fLow > 0.0 || fHigh < 0.0) {
             throw new NumericalFailureException("no sign change between " + low + " and " + high);
         }
-        int side = 0;
-        for (int iteration = 0; iteration < MAX_ITERATIONS; iteration++) {
-            double width = high - low;
-            if (width <= relativeTolerance * Math.max(Math.abs(low), Math.abs(high)) || fLow == 0.0 || fHigh == 0.0) {
-                break;
-            }
-            double next = fHigh == fLow ? 0.5 * (low + high) : low - fLow * width / (fHigh - fLow);
-            if (!(next > low && next < high)) {
-                next = 0.5 * (low + high);
-            }
-            double value = function.applyAsDouble(next);
-            if (value <= 0.0) {
-                low = next;
-                fLow = value;
-                fHigh = side == -1 ? 0.5 * fHigh : fHigh;
-                side = -1;
-            } else {
-                high = next;
-                fHigh = value;
-                fLow = side == 1 ? 0.5 * fLow : fLow;
-                side = 1;
-            }
+        if (fLow == 0.0) {
+            return low;
         }
-        return fLow == 0.0 ? low : fHigh == 0.0 ? high : 0.5 * (low + high);
+        if (fHigh == 0.0) {
+            return high;
+        }
+        double absolute = 0.5 * relativeTolerance * Math.max(Math.abs(low), Math.abs(high));
+        return new BrentSolver(relativeTolerance, absolute).solve(MAX_EVALUATIONS, function::applyAsDouble, low, high);
     }
 }

@@ -20,4 +20,9 @@ public interface TemperatureModel {
 
     /** Highest temperature the model describes, K. */
     double highestTemperature();
+
+    /** Whether the curve at {@code temperature} rests on data beyond the measured temperatures; a law typed in never does. */
+    default boolean isExtrapolated(double temperature) {
+        return false;
+    }
 }

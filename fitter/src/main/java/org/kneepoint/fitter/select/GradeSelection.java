@@ -7,8 +7,8 @@ import org.kneepoint.fitter.loadline.DesignCheckResult;
 import org.kneepoint.fitter.loadline.TemperatureModel;
 
 /**
- * Ranks grades against requirements (DESIGN §2, workflow 4): each grade's design check at the required
- * temperature on the required load line, its shortfalls (flux density below the minimum, loss above
+ * Ranks grades against requirements (docs/design.md §2, workflow 4): each grade's design check at the required
+ * temperature on the required load line (loss by the recoil line through the operating point), its shortfalls (flux density below the minimum, loss above
  * the maximum, temperature outside the grade's model), and the ranked list.
  */
 public final class GradeSelection {
@@ -33,9 +33,10 @@ public final class GradeSelection {
         double outside = Math.max(model.lowestTemperature() - temperature, temperature - model.highestTemperature());
         if (outside > 0.0) {
             return new RankedGrade(candidate.name(), List.of(new Shortfall(Shortfall.Requirement.TEMPERATURE_RANGE, outside)),
-                    Double.NaN, Double.NaN, Double.NaN, null, candidate.price());
+                    Double.NaN, Double.NaN, Double.NaN, null, candidate.price(), null, false);
         }
-        DesignCheckResult check = DesignCheck.of(model, requirements.loadLine(), temperature, requirements.maximumIrreversibleLoss());
+        DesignCheckResult check = DesignCheck.of(model, requirements.loadLine().pc(), requirements.field(), temperature,
+                requirements.maximumIrreversibleLoss());
         List<Shortfall> shortfalls = new ArrayList<>(2);
         double flux = check.point().b();
         if (requirements.minimumFluxDensity() != null && flux < requirements.minimumFluxDensity()) {
@@ -45,7 +46,9 @@ public final class GradeSelection {
             shortfalls.add(new Shortfall(Shortfall.Requirement.MAXIMUM_IRREVERSIBLE_LOSS,
                     check.irreversibleLoss() - requirements.maximumIrreversibleLoss()));
         }
-        return new RankedGrade(candidate.name(), shortfalls, flux, check.kneeMarginField(), check.irreversibleLoss(),
-                check.maxWorkingTemperature(), candidate.price());
+        double kneeMargin = check.kneeMarginField() == null ? Double.NaN : check.kneeMarginField();
+        return new RankedGrade(candidate.name(), shortfalls, flux, kneeMargin, check.irreversibleLoss(),
+                check.maxWorkingTemperature(), candidate.price(), check.working().minimum().temperature(),
+                check.beyondMeasuredField());
     }
 }

@@ -1,6 +1,7 @@
 package org.kneepoint.fitter.shape;
 
-import org.kneepoint.fitter.special.GaussLegendreRule;
+import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
+import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
 import org.kneepoint.fitter.special.GeneralizedCompleteEllipticIntegral;
 
 /**
@@ -14,12 +15,12 @@ import org.kneepoint.fitter.special.GeneralizedCompleteEllipticIntegral;
  * coaxial circles, μ0·√(ac)·[(2/k − k)·K − (2/k)·E], from memory, written with Bulirsch's cel), and with
  * Q(0) = 0, Q'(0) = π·c² (Weber–Schafheitlin integral ∫ J1(ka)·J1(kc)/k dk = c/(2a), from memory):
  * Q(L) = π·c²·L − 2∫₀^L (L − t)·m(t) dt, Q'(h) = π·c² − 2∫₀^h m(t) dt.
- * The integrals are taken by 16-point Gauss–Legendre on panels that double in width from (a − c)/2,
+ * The integrals are taken by 16-point Gauss–Legendre (Hipparchus) on panels that double in width from (a − c)/2,
  * which resolves the logarithmic near-singularity at t = 0 when c is close to a.
  */
 final class CoaxialCylinderInteraction {
 
-    private static final GaussLegendreRule RULE = new GaussLegendreRule(16);
+    private static final GaussIntegrator RULE = new GaussIntegratorFactory().legendre(16);
 
     private CoaxialCylinderInteraction() {
     }
@@ -43,10 +44,10 @@ final class CoaxialCylinderInteraction {
             double half = 0.5 * (end - lower);
             double middle = 0.5 * (end + lower);
             double panel = 0.0;
-            for (int i = 0; i < RULE.size(); i++) {
-                double t = middle + half * RULE.node(i);
+            for (int i = 0; i < RULE.getNumberOfPoints(); i++) {
+                double t = middle + half * RULE.getPoint(i);
                 double weight = weighted ? upper - t : 1.0;
-                panel += RULE.weight(i) * weight * loopMutual(outer, inner, t);
+                panel += RULE.getWeight(i) * weight * loopMutual(outer, inner, t);
             }
             sum += half * panel;
             lower = end;

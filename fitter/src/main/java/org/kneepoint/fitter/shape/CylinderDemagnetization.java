@@ -9,7 +9,7 @@ import org.kneepoint.fitter.special.CompleteEllipticIntegral;
  * <ul>
  * <li>Nm = 1 + 4/(3πγ)·[1 − √(1+γ²)·(γ²·(K − E) + E)], m = 1/(1 + γ²): the zero-eccentricity term of
  * M. Beleggia et al., J. Phys. D 38, 3333 (2005), equal to the exact χ = 0 result of D.-X. Chen,
- * J. A. Brug, R. B. Goldfarb, IEEE Trans. Magn. 27, 3601 (1991) (REFERENCES §1a). γ²K + (1−γ²)E is
+ * J. A. Brug, R. B. Goldfarb, IEEE Trans. Magn. 27, 3601 (1991) (docs/references.md §1a). γ²K + (1−γ²)E is
  * regrouped as γ²(K − E) + E so that long cylinders do not cancel.</li>
  * <li>Nf = 1 − (4/π)·g·√(1+g²)·(K − E), g = γ/2, m = 1/(1 + g²): derived here. With U(d) the
  * Coulomb integral ∬dA dA'/r between two coaxial end discs a distance d apart, Nm(γ) =

@@ -33,7 +33,7 @@ public record DemagnetizingFactors(double magnetometric, double fluxmetric, doub
         };
     }
 
-    /** Pc = (1 − N)/N for each kind (DESIGN §4; exact for an ellipsoid in open circuit). */
+    /** Pc = (1 − N)/N for each kind (docs/design.md §4; exact for an ellipsoid in open circuit). */
     public PermeanceCoefficients permeanceCoefficients() {
         return new PermeanceCoefficients(toPermeance(magnetometric), toPermeance(fluxmetric), toPermeance(centrePoint));
     }

@@ -1,7 +1,7 @@
 package org.kneepoint.fitter.shape;
 
 /**
- * The three demagnetizing factors of a non-ellipsoidal magnet (DESIGN §4; D.-X. Chen,
+ * The three demagnetizing factors of a non-ellipsoidal magnet (docs/design.md §4; D.-X. Chen,
  * J. A. Brug, R. B. Goldfarb, IEEE Trans. Magn. 27, 3601, 1991): which average of the
  * demagnetizing field a result uses.
  */

@@ -5,7 +5,7 @@ import org.kneepoint.fitter.special.GeneralizedCompleteEllipticIntegral;
 /**
  * The two face terms of the field of an axially magnetized cylinder of radius a, half-length b
  * (N. Derby, S. Olbert, "Cylindrical magnets and ideal solenoids", Am. J. Phys. 78, 229, 2010;
- * REFERENCES §4a): Bρ = (Br/π)·[radial(ρ, z + b) − radial(ρ, z − b)] and
+ * docs/references.md §4a): Bρ = (Br/π)·[radial(ρ, z + b) − radial(ρ, z − b)] and
  * Bz = (Br/π)·[axial(ρ, z + b) − axial(ρ, z − b)], where, with ζ the height above a face,
  * α = a/√(ζ² + (ρ + a)²), β = ζ/√(ζ² + (ρ + a)²), γ = (a − ρ)/(a + ρ),
  * kc = √[(ζ² + (a − ρ)²)/(ζ² + (a + ρ)²)]: radial = α·cel(kc, 1, 1, −1) and

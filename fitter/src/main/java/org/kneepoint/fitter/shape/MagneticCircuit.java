@@ -7,7 +7,7 @@ import org.kneepoint.fitter.error.BadInputException;
  * and an air gap of length Lg and area Ag. With the leakage factor σ ≥ 1 (Bm·Am = σ·Bg·Ag) and the
  * reluctance factor f ≥ 1 (Hm·Lm = f·Hg·Lg) the load line has Pc = (Lm·Ag)/(Am·Lg)·(σ/f)
  * (common practice: R. J. Parker, Advances in Permanent Magnetism, Wiley 1990; P. Campbell,
- * Permanent Magnet Materials and their Application, CUP 1994; REFERENCES §6c, from memory). Its
+ * Permanent Magnet Materials and their Application, CUP 1994; docs/references.md §6c, from memory). Its
  * demagnetizing factors are the equivalent N = 1/(1 + Pc), the same for all three kinds.
  *
  * @param magnetLength    Lm along the magnetization, m

@@ -4,7 +4,7 @@ import org.kneepoint.fitter.error.BadInputException;
 
 /**
  * Permeance coefficients Pc = −B/(μ0·H) = (1 − N)/N for the three kinds of demagnetizing
- * factor (DESIGN §4): the slope of the open-circuit load line, dimensionless and positive.
+ * factor (docs/design.md §4): the slope of the open-circuit load line, dimensionless and positive.
  *
  * @param magnetometric from Nm
  * @param fluxmetric    from Nf

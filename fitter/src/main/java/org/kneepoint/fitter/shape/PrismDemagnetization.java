@@ -6,7 +6,7 @@ package org.kneepoint.fitter.shape;
  *
  * <ul>
  * <li>Nm: A. Aharoni, "Demagnetizing factors for rectangular ferromagnetic prisms", J. Appl. Phys. 83,
- * 3432 (1998), Eq. (1) (REFERENCES §2a).</li>
+ * 3432 (1998), Eq. (1) (docs/references.md §2a).</li>
  * <li>Nf: derived here. The mid-plane average of the solid angle of one face (2a × 2b, distance
  * h = c) is a fourfold integral of h/r³ over two parallel rectangles; its double antiderivative in the
  * offsets (x, y) is G(x, y) = xy·atan(xy/(h·r)) + x·h·asinh(x/√(y² + h²)) + y·h·asinh(y/√(x² + h²)) − h·r,

@@ -6,7 +6,7 @@ package org.kneepoint.fitter.shape;
  * (J. A. Osborn, "Demagnetizing factors of the general ellipsoid", Phys. Rev. 67, 351, 1945).
  * With ratio m = polar/equatorial diameter:
  * prolate (m &gt; 1) N = [m·acosh(m)/√(m² − 1) − 1]/(m² − 1);
- * oblate (m &lt; 1) N = [1 − m·acos(m)/√(1 − m²)]/(1 − m²) (REFERENCES §3; the logarithm of Osborn's
+ * oblate (m &lt; 1) N = [1 − m·acos(m)/√(1 − m²)]/(1 − m²) (docs/references.md §3; the logarithm of Osborn's
  * prolate form is written as 2·acosh m). Near the sphere both are replaced by the series
  * N = (1/m²)·Σ (−q)ᵏ/(2k + 3), q = (1 − m²)/m², obtained by expanding Osborn's integral
  * N = (m/2)·∫₀^∞ ds/[(m² + s)^{3/2}·(1 + s)]. Accepted m: {@value #MIN_RATIO} to {@value #MAX_RATIO}.

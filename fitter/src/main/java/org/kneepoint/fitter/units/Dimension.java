@@ -16,7 +16,8 @@ public enum Dimension {
     MOLAR_SUSCEPTIBILITY("molar susceptibility", "m³/mol", "-1.6e-10 m³/mol or -12.97e-6 cm³/mol"),
     DENSITY("density", "kg/m³", "7500 kg/m³ or 7.5 g/cm³"),
     MOLAR_MASS("molar mass", "kg/mol", "0.018 kg/mol or 18 g/mol"),
-    AREA("area", "m²", "1.5 cm² or 0.25 in²");
+    AREA("area", "m²", "1.5 cm² or 0.25 in²"),
+    VOLUME("volume", "m³", "2.5 mm³ or 0.1 cm³");
 
     private final String description;
     private final String siSymbol;

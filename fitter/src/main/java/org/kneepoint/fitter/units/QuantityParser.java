@@ -29,7 +29,9 @@ public final class QuantityParser {
         double number = DecimalNumber.parseOrNaN(matcher.group(1), false);
         String unitText = matcher.group(2).strip();
         Unit unit = UnitCatalog.find(unitText, expected).orElseThrow(() -> new IllegalArgumentException(
-                UnitMessages.wrongQuantity(stripped, expected, detail(unitText))));
+                UnitMessages.isSusceptibility(expected) && UnitMessages.isMomentPerAmount(unitText)
+                        ? UnitMessages.momentPerAmount(unitText)
+                        : UnitMessages.wrongQuantity(stripped, expected, detail(unitText))));
         double si = unit.toSi(number);
         if (!Double.isFinite(si)) {
             throw new IllegalArgumentException(UnitMessages.wrongQuantity(stripped, expected, " (out of range)"));

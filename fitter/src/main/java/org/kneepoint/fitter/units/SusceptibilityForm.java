@@ -18,4 +18,23 @@ public enum SusceptibilityForm {
     public Dimension dimension() {
         return dimension;
     }
+
+    /**
+     * The susceptibility unit written as {@code text}, of whichever form; refuses anything else —
+     * emu/g and emu/mol above all, which are moments per gram or mole, not susceptibilities — with
+     * a message naming the units that are right.
+     */
+    public static Unit unitOf(String text) {
+        for (SusceptibilityForm form : values()) {
+            var unit = UnitCatalog.find(text, form.dimension());
+            if (unit.isPresent()) {
+                return unit.get();
+            }
+        }
+        if (UnitMessages.isMomentPerAmount(text)) {
+            throw new IllegalArgumentException(UnitMessages.momentPerAmount(text));
+        }
+        throw new IllegalArgumentException("expected a susceptibility unit: SI or emu/cm³ (volume), m³/kg or cm³/g ="
+                + " emu/(g·Oe) (mass), m³/mol or cm³/mol = emu/(mol·Oe) (molar), got '" + text + "'");
+    }
 }

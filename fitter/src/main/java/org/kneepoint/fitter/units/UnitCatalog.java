@@ -11,6 +11,7 @@ import static org.kneepoint.fitter.units.Dimension.MASS_SUSCEPTIBILITY;
 import static org.kneepoint.fitter.units.Dimension.MOLAR_MASS;
 import static org.kneepoint.fitter.units.Dimension.MOLAR_SUSCEPTIBILITY;
 import static org.kneepoint.fitter.units.Dimension.TEMPERATURE;
+import static org.kneepoint.fitter.units.Dimension.VOLUME;
 import static org.kneepoint.fitter.units.Dimension.VOLUME_SUSCEPTIBILITY;
 
 import java.util.List;
@@ -24,7 +25,9 @@ import java.util.Optional;
  * t/°F = 1.8·t/°C + 32 — and the CGS–SI table for magnetic quantities ("Units for magnetic
  * properties", IEEE Trans. Magn. author guide, Table I): 1 emu/cm³ = 1e3 A/m; 1 MGOe =
  * 100/(4π) kJ/m³; volume susceptibility χ_SI = 4π·χ_CGS; mass 1 cm³/g = 4π·1e-3 m³/kg; molar
- * 1 cm³/mol = 4π·1e-6 m³/mol. Matching is exact (case-sensitive): "mA/m" and "MA/m" differ by
+ * 1 cm³/mol = 4π·1e-6 m³/mol; in CGS emu/Oe = cm³, so emu/(g·Oe) is cm³/g and emu/(mol·Oe) is cm³/mol.
+ * emu/g and emu/mol are moments per mass or per mole (a magnetization), not susceptibilities, and
+ * are refused as such (see {@link UnitMessages}). Matching is exact (case-sensitive): "mA/m" and "MA/m" differ by
  * nine orders of magnitude, so no case is ever guessed.
  */
 public final class UnitCatalog {
@@ -60,9 +63,10 @@ public final class UnitCatalog {
             Unit.of("SI", VOLUME_SUSCEPTIBILITY, 1.0, "si", "1"),
             Unit.of("emu/cm³", VOLUME_SUSCEPTIBILITY, FOUR_PI, "emu/cm3", "cgs", "CGS"),
             Unit.of("m³/kg", MASS_SUSCEPTIBILITY, 1.0, "m3/kg"),
-            Unit.of("cm³/g", MASS_SUSCEPTIBILITY, FOUR_PI * 1e-3, "cm3/g", "emu/g"),
+            Unit.of("cm³/g", MASS_SUSCEPTIBILITY, FOUR_PI * 1e-3, "cm3/g", "emu/(g·Oe)", "emu/(g Oe)", "emu/g/Oe"),
             Unit.of("m³/mol", MOLAR_SUSCEPTIBILITY, 1.0, "m3/mol"),
-            Unit.of("cm³/mol", MOLAR_SUSCEPTIBILITY, FOUR_PI * 1e-6, "cm3/mol", "emu/mol"),
+            Unit.of("cm³/mol", MOLAR_SUSCEPTIBILITY, FOUR_PI * 1e-6, "cm3/mol", "emu/(mol·Oe)", "emu/(mol Oe)",
+                    "emu/mol/Oe"),
             Unit.of("kg/m³", DENSITY, 1.0, "kg/m3"),
             Unit.of("g/cm³", DENSITY, 1e3, "g/cm3", "g/cc"),
             Unit.of("kg/mol", MOLAR_MASS, 1.0),
@@ -70,7 +74,11 @@ public final class UnitCatalog {
             Unit.of("m²", AREA, 1.0, "m2"),
             Unit.of("cm²", AREA, 1e-4, "cm2"),
             Unit.of("mm²", AREA, 1e-6, "mm2"),
-            Unit.of("in²", AREA, 0.0254 * 0.0254, "in2"));
+            Unit.of("in²", AREA, 0.0254 * 0.0254, "in2"),
+            Unit.of("m³", VOLUME, 1.0, "m3"),
+            Unit.of("cm³", VOLUME, 1e-6, "cm3", "cc"),
+            Unit.of("mm³", VOLUME, 1e-9, "mm3"),
+            Unit.of("in³", VOLUME, 0.0254 * 0.0254 * 0.0254, "in3"));
 
     private UnitCatalog() {
     }

@@ -3,7 +3,7 @@ package org.kneepoint.fitter.field;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
+import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -20,7 +20,7 @@ class BlockFieldTest {
     @CsvSource({"0.0", "0.05", "0.3", "1.0", "12.0"})
     void on_axis_field_follows_the_solid_angle_of_a_rectangle(double distance) {
         // Bz = (Br/π)·[atan(ab/(z·√(a² + b² + z²))) − atan(ab/((z + L)·√(a² + b² + (z + L)²)))], z from the pole face
-        // (REFERENCES §4a; Engel-Herbert & Hesjedal 2005)
+        // (docs/references.md §4a; Engel-Herbert & Hesjedal 2005)
         double a = 0.5;
         double b = 0.3;
         double length = 0.4;
@@ -37,7 +37,7 @@ class BlockFieldTest {
     @ParameterizedTest
     @CsvSource({"0.2, 0.1, 0.5", "0.7, -0.1, 0.05", "0.1, 0.1, -0.1", "0.0, 0.5, 0.0", "1.2, 0.9, -0.8", "-0.3, 0.05, 0.0"})
     void field_agrees_with_numerical_integration_over_the_charged_faces(double x, double y, double z) {
-        // direct quadrature of the face charges ±M, Commons Math integrator
+        // direct quadrature of the face charges ±M, Hipparchus integrator
         double[] expected = FaceChargeQuadrature.block(0.5, 0.3, 0.2, BR, x, y, z);
         FieldAssertions.assertClose(expected, field.fluxDensity(x, y, z), 1e-6, "(" + x + ", " + y + ", " + z + ")");
     }
@@ -62,7 +62,7 @@ class BlockFieldTest {
     @Test
     void mid_plane_average_of_the_field_gives_the_closed_form_fluxmetric_factor() {
         // Nf = 1 − ⟨Bz⟩/Br over the mid-plane (definition, Chen, Brug, Goldfarb 1991) from the face-charge field, against
-        // the closed form derived in PrismDemagnetization; Commons Math Gauss–Legendre over a quarter of the section
+        // the closed form derived in PrismDemagnetization; Hipparchus Gauss–Legendre over a quarter of the section
         double integral = integrate(x -> integrate(y -> field.fluxDensity(x, y, 0).z(), 0, 0.3), 0, 0.5);
         assertEquals(1 - integral / (0.15 * BR), block.demagnetizingFactors().fluxmetric(), 1e-10);
     }

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
+import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -22,7 +22,7 @@ class CylinderFieldTest {
     @ParameterizedTest
     @CsvSource({"0.41", "0.6", "1.5", "7.0", "-2.0", "0.0", "0.2", "-0.39"})
     void on_axis_field_follows_the_solid_angle_formula(double z) {
-        // B(z) = (Br/2)·[(z + L/2)/√(R² + (z + L/2)²) − (z − L/2)/√(R² + (z − L/2)²)] (REFERENCES §4a, standard);
+        // B(z) = (Br/2)·[(z + L/2)/√(R² + (z + L/2)²) − (z − L/2)/√(R² + (z − L/2)²)] (docs/references.md §4a, standard);
         // the same expression for B holds inside, where B = μ0·(H + M)
         double r = 0.5;
         double half = 0.4;
@@ -36,7 +36,7 @@ class CylinderFieldTest {
     @ParameterizedTest
     @CsvSource({"0.2, 0.1, 0.7", "0.8, -0.3, 0.1", "0.1, 0.2, -0.15", "0.0, 0.3, 0.6", "1.3, 0.9, -1.1", "0.3, 0.0, 0.0"})
     void field_agrees_with_numerical_integration_over_the_charged_faces(double x, double y, double z) {
-        // direct quadrature of the face charges ±M (Coulomb's law for magnetic charge), Commons Math integrator
+        // direct quadrature of the face charges ±M (Coulomb's law for magnetic charge), Hipparchus integrator
         double[] expected = FaceChargeQuadrature.coaxial(0.5, 0, 0.4, BR, x, y, z);
         FieldAssertions.assertClose(expected, field.fluxDensity(x, y, z), 1e-6, "(" + x + ", " + y + ", " + z + ")");
     }
@@ -88,7 +88,7 @@ class CylinderFieldTest {
     @Test
     void mid_plane_average_of_the_field_gives_the_closed_form_fluxmetric_factor() {
         // Nf = 1 − ⟨Bz⟩/Br over the mid-plane disc (definition, Chen, Brug, Goldfarb 1991) from the Derby–Olbert field,
-        // against the closed form derived in CylinderDemagnetization; Commons Math Gauss–Legendre
+        // against the closed form derived in CylinderDemagnetization; Hipparchus Gauss–Legendre
         double average = new IterativeLegendreGaussIntegrator(16, 1e-12, 1e-15).integrate(Integer.MAX_VALUE,
                 rho -> 2 * rho * field.fluxDensity(rho, 0, 0).z(), 0, 0.5) / (0.25 * BR);
         assertEquals(1 - average, cylinder.demagnetizingFactors().fluxmetric(), 1e-10);

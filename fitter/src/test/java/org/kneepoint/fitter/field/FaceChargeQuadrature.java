@@ -1,11 +1,11 @@
 package org.kneepoint.fitter.field;
 
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
+import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
 
 /**
  * Test-only reference: B = μ0·(H + M inside) with H = (σ/4π)·∬ (r − r')/|r − r'|³ dA' summed over the
- * charged pole faces (σ = ±M), integrated numerically with Apache Commons Math 3.6.1
+ * charged pole faces (σ = ±M), integrated numerically with Hipparchus 4.0.1
  * IterativeLegendreGaussIntegrator (a fresh one per integral, since the integrator keeps state).
  */
 final class FaceChargeQuadrature {

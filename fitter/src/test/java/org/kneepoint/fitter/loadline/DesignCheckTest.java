@@ -1,7 +1,6 @@
 package org.kneepoint.fitter.loadline;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
@@ -33,13 +32,27 @@ class DesignCheckTest {
     void reversible_change_is_the_remanence_ratio_minus_one() {
         DesignCheckResult result = DesignCheck.of(law, new LoadLine(2.0, 0.0), 373.15, DesignCheck.DEFAULT_LOSS_LIMIT);
         assertEquals(-0.0012 * 80, result.reversibleChange(), 1e-12);
-        assertEquals(0.0, result.irreversibleLoss(), 0.0);
+        assertEquals(0.0, result.irreversibleLoss(), 1e-9);
     }
 
     @Test
-    void no_maximum_temperature_when_the_loss_limit_is_exceeded_at_the_reference() {
-        DesignCheckResult result = DesignCheck.of(law, new LoadLine(5.0, 1.7e6), 293.15, 0.01);
+    void a_check_that_exceeds_the_limit_reports_the_maximum_below_its_temperature() {
+        // issue 11: the working range is where loss(T) ≤ limit; a check beyond it still learns where that range ends
+        LoadLine line = new LoadLine(5.0, 1.7e6);
+        DesignCheckResult result = DesignCheck.of(law, line, 293.15, 0.01);
         assertTrue(result.irreversibleLoss() > 0.01);
-        assertNull(result.maxWorkingTemperature());
+        assertTrue(result.maxWorkingTemperature() < 293.15);
+        assertEquals(LimitReason.LIMIT_REACHED, result.working().maximum().reason());
+        assertEquals(0.01, DesignCheck.lossAt(law, line, result.maxWorkingTemperature()), 1e-4);
+    }
+
+    @Test
+    void an_external_field_on_a_free_magnet_loses_more_than_the_same_circuit_field() {
+        DesignCheckResult circuit = DesignCheck.of(law, 2.0, AppliedField.opposing(3e5), 393.15, 0.01);
+        DesignCheckResult external = DesignCheck.of(law, 2.0, AppliedField.external(3e5), 393.15, 0.01);
+        assertEquals(4.5e5, external.loadLine().opposingField(), 1e-6);
+        assertEquals(FieldConvention.EXTERNAL, external.appliedField().convention());
+        assertTrue(external.irreversibleLoss() > circuit.irreversibleLoss());
+        assertTrue(external.maxWorkingTemperature() < circuit.maxWorkingTemperature());
     }
 }

@@ -13,14 +13,14 @@ class DutySequenceTest {
 
     @Test
     void worst_point_so_far_sets_the_recoil_line() {
-        // DESIGN §4: a duty sequence keeps the loss of its worst point; later milder steps recoil on that line
+        // docs/design.md §4: a duty sequence keeps the loss of its worst point; later milder steps recoil on that line
         List<DutyStepResult> results = DutySequence.run(law, 1.0,
                 List.of(new DutyStep(293.15, 0), new DutyStep(423.15, 3e5), new DutyStep(293.15, 0)));
-        assertEquals(0.0, results.get(0).irreversibleLoss(), 0.0);
+        assertEquals(0.0, results.get(0).irreversibleLoss(), 1e-9);
         double lost = results.get(1).irreversibleLoss();
         assertTrue(lost > 0.0);
         assertEquals(lost, results.get(2).irreversibleLoss(), 0.0);
-        assertEquals(0.0, results.get(2).stepLoss(), 0.0);
+        assertEquals(0.0, results.get(2).stepLoss(), 1e-9);
         // back at T0 on the recoil line of remanence (1 − ℓ)·Br0: Bd = Br'·Pc/(Pc + μrec) (common practice)
         assertEquals((1 - lost) * 1.3 * 1.0 / (1.0 + 1.05), results.get(2).point().b(), 1e-12);
         assertTrue(results.get(2).point().b() < results.get(0).point().b());

@@ -12,7 +12,7 @@ class LinearTemperatureLawTest {
 
     @Test
     void remanence_and_coercivity_follow_the_linear_law() {
-        // Br(T) = BrRef·(1 + α·(T − Tref)), as in the Modelica FluxTubes HardMagnetic records (REFERENCES §6b)
+        // Br(T) = BrRef·(1 + α·(T − Tref)), as in the Modelica FluxTubes HardMagnetic records (docs/references.md §6b)
         LinearRecoilKnee hot = law.at(393.15);
         assertEquals(1.3 * (1 - 0.0012 * 100), hot.remanence(), 1e-12);
         assertEquals(1.6e6 * (1 - 0.006 * 100), hot.intrinsicCoercivity(), 1e-6);

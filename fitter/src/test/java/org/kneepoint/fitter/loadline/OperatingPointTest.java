@@ -22,7 +22,7 @@ class OperatingPointTest {
 
     @Test
     void opposing_field_shifts_the_linear_point_by_mu0_mu_rec_pc_ha_over_pc_plus_mu_rec() {
-        // B = (Br·Pc − μ0·μrec·Pc·Ha)/(Pc + μrec): the recoil line met by B = −μ0·Pc·(H + Ha) (DESIGN §4), solved by hand
+        // B = (Br·Pc − μ0·μrec·Pc·Ha)/(Pc + μrec): the recoil line met by B = −μ0·Pc·(H + Ha) (docs/design.md §4), solved by hand
         double pc = 2.0;
         double ha = 2e5;
         OperatingPoint point = new LoadLine(pc, ha).on(LINEAR);

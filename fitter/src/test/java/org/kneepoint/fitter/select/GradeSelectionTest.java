@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.fitter.loadline.AppliedField;
 import org.kneepoint.fitter.loadline.LinearRecoilKnee;
 import org.kneepoint.fitter.loadline.LinearTemperatureLaw;
 import org.kneepoint.fitter.loadline.LoadLine;
@@ -74,6 +75,18 @@ class GradeSelectionTest {
         Requirements requirements = Requirements.forShape(cylinder, DemagnetizingKind.FLUXMETRIC, 0.0, 293.15, null, 0.01);
         assertEquals(cylinder.demagnetizingFactors().permeanceCoefficients().fluxmetric(), requirements.loadLine().pc(), 0.0);
         assertThrows(BadInputException.class, () -> new Requirements(new LoadLine(1, 0), 293.15, null, 0.0));
+    }
+
+    @Test
+    void an_external_field_is_ranked_on_the_load_line_it_shifts_by_one_over_one_minus_n() {
+        // free magnet, N = 1/(1 + Pc): Ha = Hext·(1 + Pc)/Pc (docs/design.md §4)
+        Requirements external = Requirements.of(1.0, AppliedField.external(2e5), 393.15, null, 0.01);
+        assertEquals(4e5, external.loadLine().opposingField(), 1e-9);
+        RankedGrade viaExternal = GradeSelection.row(MIDDLE, external);
+        RankedGrade viaCircuit = GradeSelection.row(MIDDLE, new Requirements(new LoadLine(1.0, 4e5), 393.15, null, 0.01));
+        assertEquals(viaCircuit.irreversibleLoss(), viaExternal.irreversibleLoss(), 0.0);
+        assertTrue(viaExternal.irreversibleLoss() > GradeSelection.row(MIDDLE,
+                new Requirements(new LoadLine(1.0, 2e5), 393.15, null, 0.01)).irreversibleLoss());
     }
 
     private static List<String> names(List<RankedGrade> rows) {

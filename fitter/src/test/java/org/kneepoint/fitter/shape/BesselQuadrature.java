@@ -1,11 +1,11 @@
 package org.kneepoint.fitter.shape;
 
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
-import org.apache.commons.math3.special.BesselJ;
+import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
+import org.hipparchus.special.BesselJ;
 
 /**
- * Test-only reference integrals over Bessel functions (Apache Commons Math 3.6.1 BesselJ and
+ * Test-only reference integrals over Bessel functions (Hipparchus 4.0.1 BesselJ and
  * IterativeLegendreGaussIntegrator), panel by panel of length π up to where the exponential
  * damping has made the rest negligible. A fresh integrator per call, because the integrator keeps
  * state and nested integrals would share it.

@@ -14,7 +14,7 @@ class CylinderDemagnetizationTest {
     @ParameterizedTest
     @ValueSource(doubles = {1e-3, 0.01, 0.1, 0.5, 1.0, 3.0, 10.0, 100.0, 1e3})
     void magnetometric_matches_the_hypergeometric_form(double aspect) {
-        // Beleggia et al., J. Phys. D 38, 3333 (2005): Nm = 1 + 4/(3πγ) − 2F1(−1/2, 1/2; 2; −1/γ²) (REFERENCES §1a);
+        // Beleggia et al., J. Phys. D 38, 3333 (2005): Nm = 1 + 4/(3πγ) − 2F1(−1/2, 1/2; 2; −1/γ²) (docs/references.md §1a);
         // 2F1 by its Euler integral (NIST DLMF 15.6.1), t = sin²θ: (2/π)∫ 2cos²θ·√(1 + sin²θ/γ²) dθ
         java.util.function.DoubleUnaryOperator euler =
                 t -> 2 * Math.cos(t) * Math.cos(t) * Math.sqrt(1 + Math.sin(t) * Math.sin(t) / (aspect * aspect));
@@ -46,7 +46,7 @@ class CylinderDemagnetizationTest {
 
     @Test
     void centre_point_factor_of_a_one_to_one_cylinder_is_one_minus_one_over_root_two() {
-        // solid angle of the end discs seen from the centre (on-axis disc formula, REFERENCES §4a)
+        // solid angle of the end discs seen from the centre (on-axis disc formula, docs/references.md §4a)
         assertEquals(1 - 1 / Math.sqrt(2), CylinderDemagnetization.centrePoint(1.0), 1e-15);
     }
 

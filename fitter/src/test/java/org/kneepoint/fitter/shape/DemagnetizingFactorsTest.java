@@ -11,7 +11,7 @@ class DemagnetizingFactorsTest {
 
     @Test
     void ellipsoid_factor_gives_permeance_one_minus_n_over_n() {
-        // DESIGN §4: Pc = (1 − N)/N, exact for an ellipsoid; a sphere (N = 1/3) has Pc = 2
+        // docs/design.md §4: Pc = (1 − N)/N, exact for an ellipsoid; a sphere (N = 1/3) has Pc = 2
         PermeanceCoefficients pc = DemagnetizingFactors.uniform(1.0 / 3).permeanceCoefficients();
         assertEquals(2.0, pc.magnetometric(), 1e-15);
         assertEquals(2.0, pc.coefficient(DemagnetizingKind.CENTRE_POINT), 1e-15);

@@ -1,13 +1,13 @@
 package org.kneepoint.fitter.shape;
 
 import java.util.function.DoubleUnaryOperator;
-import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
-import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactory;
+import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
+import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
 
 /**
  * Test-only quadrature for integrands with (integrable) logarithmic singularities at the ends of
  * the interval: panels halve in width towards both ends, each integrated with the 12-point
- * Gauss–Legendre rule of Apache Commons Math 3.6.1.
+ * Gauss–Legendre rule of Hipparchus 4.0.1.
  */
 final class GradedQuadrature {
 

@@ -17,7 +17,7 @@ class MagnetOnSteelPlateTest {
 
     @Test
     void centre_of_the_real_magnet_sees_more_demagnetization_than_the_contact_face() {
-        // on-axis field of a cylinder (REFERENCES §4a) for the doubled magnet (half-length L = 5 mm), at the real magnet's
+        // on-axis field of a cylinder (docs/references.md §4a) for the doubled magnet (half-length L = 5 mm), at the real magnet's
         // centre z = L/2 versus the contact face z = 0, which is the centre-point value reported
         double radius = 0.01;
         double half = 0.005;

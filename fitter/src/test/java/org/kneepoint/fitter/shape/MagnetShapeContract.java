@@ -12,7 +12,7 @@ import org.kneepoint.fitter.error.BadInputException;
 
 /**
  * The contract every shape keeps (STYLE: one abstract suite for every variant): 0 &lt; N &lt; 1 for each
- * kind, Pc = (1 − N)/N (DESIGN §4), N unchanged when every size doubles (N is dimensionless and
+ * kind, Pc = (1 − N)/N (docs/design.md §4), N unchanged when every size doubles (N is dimensionless and
  * magnetostatics has no length scale), volume growing eightfold, bad sizes rejected with a message
  * that names the size and what was expected.
  */

@@ -11,7 +11,7 @@ class PrismDemagnetizationTest {
 
     @Test
     void cube_has_one_third_by_symmetry() {
-        // symmetry and the sum rule Nx + Ny + Nz = 1 (REFERENCES §2a); the centre value is 1/3 because each of the six
+        // symmetry and the sum rule Nx + Ny + Nz = 1 (docs/references.md §2a); the centre value is 1/3 because each of the six
         // faces subtends 4π/6 from the centre
         assertEquals(1.0 / 3, PrismDemagnetization.magnetometric(1, 1, 1), 1e-14);
         assertEquals(1.0 / 3, PrismDemagnetization.centrePoint(2, 2, 2), 1e-15);
@@ -19,7 +19,7 @@ class PrismDemagnetizationTest {
 
     @Test
     void cyclic_sum_of_aharoni_factors_is_one() {
-        // sum rule Dx + Dy + Dz = 1, with Dx = Dz(b, c, a), Dy = Dz(c, a, b) (Aharoni 1998, REFERENCES §2a)
+        // sum rule Dx + Dy + Dz = 1, with Dx = Dz(b, c, a), Dy = Dz(c, a, b) (Aharoni 1998, docs/references.md §2a)
         for (double[] e : HALF_EDGES) {
             double sum = PrismDemagnetization.magnetometric(e[0], e[1], e[2]) + PrismDemagnetization.magnetometric(e[1], e[2], e[0])
                     + PrismDemagnetization.magnetometric(e[2], e[0], e[1]);
@@ -29,7 +29,7 @@ class PrismDemagnetizationTest {
 
     @Test
     void aharoni_agrees_with_the_beleggia_de_graef_millev_closed_form() {
-        // M. Beleggia, M. De Graef, Y. T. Millev, J. Phys. D 39, 891 (2006), Nxx for edges 1 × ly × lz (REFERENCES §2a)
+        // M. Beleggia, M. De Graef, Y. T. Millev, J. Phys. D 39, 891 (2006), Nxx for edges 1 × ly × lz (docs/references.md §2a)
         for (double[] e : HALF_EDGES) {
             double expected = beleggiaAlongUnitEdge(e[0] / e[2], e[1] / e[2]);
             // both forms cancel for edge ratios of 100, where they agree to about 1e-10 relative
@@ -40,7 +40,7 @@ class PrismDemagnetizationTest {
     @Test
     void fluxmetric_matches_quadrature_of_the_face_solid_angle_over_the_mid_plane() {
         // Nf = mean over the mid-plane of the solid angle of the two faces / (4π) each (definition, Chen, Brug, Goldfarb
-        // 1991); rectangle solid angle Σ ±atan(uv/(h·r)) (REFERENCES §4a); Commons Math adaptive Gauss–Legendre
+        // 1991); rectangle solid angle Σ ±atan(uv/(h·r)) (docs/references.md §4a); Hipparchus adaptive Gauss–Legendre
         double[][] cases = {{1, 1, 1}, {1, 2, 3}, {0.5, 0.5, 5}, {5, 5, 0.5}, {3, 0.7, 1.1}, {0.5, 0.5, 50}, {50, 50, 0.5}, {50, 0.5, 5}};
         for (double[] e : cases) {
             double a = e[0];

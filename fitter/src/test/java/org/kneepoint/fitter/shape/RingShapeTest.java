@@ -1,10 +1,13 @@
 package org.kneepoint.fitter.shape;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.kneepoint.fitter.error.BadInputException;
 
 class RingShapeTest {
 
@@ -13,7 +16,7 @@ class RingShapeTest {
     void superposed_factors_match_averages_of_the_derby_olbert_field(double outer, double inner, double length) {
         // Nm = 1 − ⟨Bz⟩/Br over the ring volume and Nf = 1 − ⟨Bz⟩/Br over the mid-plane annulus (definitions, Chen,
         // Brug, Goldfarb 1991), with Bz of outer minus inner cylinder from Derby & Olbert (Am. J. Phys. 78, 229, 2010)
-        // and a graded Gauss–Legendre quadrature (Commons Math); the two routes share only the cylinder face terms
+        // and a graded Gauss–Legendre quadrature (Hipparchus); the two routes share only the cylinder face terms
         double a = outer / 2;
         double c = inner / 2;
         double b = length / 2;
@@ -49,5 +52,19 @@ class RingShapeTest {
     private static double bzOverBr(double a, double c, double b, double rho, double z) {
         return (DerbyOlbertTerms.axial(a, rho, z + b) - DerbyOlbertTerms.axial(a, rho, z - b)
                 - DerbyOlbertTerms.axial(c, rho, z + b) + DerbyOlbertTerms.axial(c, rho, z - b)) / Math.PI;
+    }
+
+    @ParameterizedTest
+    @CsvSource({"0.010, 0.0099", "0.020, 0.0198", "0.003, 0.00297", "0.1, 0.0001"})
+    void a_ring_typed_at_the_documented_bore_limit_is_accepted_despite_rounding(double outer, double inner) {
+        // the bug: OD 10 mm, ID 9.9 mm gives 0.9900000000000001 and was refused as above 0.99
+        RingShape ring = new RingShape(outer, inner, 0.005);
+        assertTrue(ring.volume() > 0);
+    }
+
+    @Test
+    void a_ring_past_the_bore_limit_is_still_refused() {
+        assertThrows(BadInputException.class,
+                () -> new RingShape(0.010, 0.00991, 0.005));
     }
 }

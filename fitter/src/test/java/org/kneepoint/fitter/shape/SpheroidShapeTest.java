@@ -22,7 +22,7 @@ class SpheroidShapeTest {
     @CsvSource({"0.1, 0.860804", "0.5, 0.527200", "0.9, 0.361822", "1.1, 0.308285", "1.5, 0.232981", "1.8, 0.194056",
         "2.1, 0.164585", "3.0, 0.108709", "5.0, 0.055821", "10, 0.020286", "100, 0.000430"})
     void osborn_forms_reproduce_stoner_table_one(double ratio, double tabulated) {
-        // E. C. Stoner, Phil. Mag. 36, 803 (1945), Table I, as transcribed in REFERENCES §3 (row m = 2.0 skipped: the
+        // E. C. Stoner, Phil. Mag. 36, 803 (1945), Table I, as transcribed in docs/references.md §3 (row m = 2.0 skipped: the
         // transcription there is very probably a digit error)
         double factor = new SpheroidShape(1.0, ratio).demagnetizingFactor();
         assertEquals(tabulated, factor, 6e-7);
@@ -32,7 +32,7 @@ class SpheroidShapeTest {
     @ValueSource(doubles = {1e-3, 0.02, 0.3, 0.99, 0.996, 1.004, 1.01, 1.3, 4.0, 60.0, 1e3})
     void osborn_forms_match_the_general_ellipsoid_integral(double ratio) {
         // N = (abc/2)·∫ ds/[(c² + s)·√((a² + s)(b² + s)(c² + s))] (R. Prozorov, V. G. Kogan, Phys. Rev. Applied 10, 014030,
-        // 2018, Eqs. (20)–(21), REFERENCES §3) with a = b = 1, c = ratio, integrated in u = ln s over panels
+        // 2018, Eqs. (20)–(21), docs/references.md §3) with a = b = 1, c = ratio, integrated in u = ln s over panels
         double c = ratio;
         double integral = 0;
         double top = Math.log(Math.max(1, c * c)) + 45;

@@ -2,7 +2,7 @@ package org.kneepoint.fitter.special;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator;
+import org.hipparchus.analysis.integration.IterativeLegendreGaussIntegrator;
 import org.junit.jupiter.api.Test;
 
 class GeneralizedCompleteEllipticIntegralTest {
@@ -10,7 +10,7 @@ class GeneralizedCompleteEllipticIntegralTest {
     @Test
     void cel_matches_direct_quadrature_of_its_definition() {
         // definition of cel, R. Bulirsch, Numer. Math. 13, 305–315 (1969); outside quadrature:
-        // Apache Commons Math 3.6.1 IterativeLegendreGaussIntegrator
+        // Hipparchus 4.0.1 IterativeLegendreGaussIntegrator
         double[][] cases = {{0.3, 1.0, 1.0, -1.0}, {0.8, 0.25, 1.0, 0.5}, {0.05, 4.0, 1.0, -2.0}, {1.7, 0.01, 1.0, 0.1},
             {0.6, 0.0, 1.0, 0.0}};
         IterativeLegendreGaussIntegrator integrator = new IterativeLegendreGaussIntegrator(24, 1e-14, 1e-15);

@@ -1,9 +1,9 @@
 package org.kneepoint.fitter.model.curieweiss;
 
 import java.util.Arrays;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.QRDecomposition;
-import org.apache.commons.math3.linear.RealMatrix;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.QRDecomposition;
+import org.hipparchus.linear.RealMatrix;
 
 /**
  * Standard errors and correlations of a Curie–Weiss fit from the linearized model at the optimum:

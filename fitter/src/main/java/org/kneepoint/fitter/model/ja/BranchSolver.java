@@ -3,7 +3,7 @@ package org.kneepoint.fitter.model.ja;
 /**
  * Integrates the Jiles–Atherton equation along one monotone branch of H, from (hStart, mStart)
  * to hEnd, with δ = sign(hEnd − hStart) fixed. Reversals of H happen only between branches, so
- * every reversal restarts the integration (DESIGN §4).
+ * every reversal restarts the integration (docs/design.md §4).
  */
 public interface BranchSolver {
 

@@ -1,17 +1,18 @@
 package org.kneepoint.fitter.model.ja;
 
-import org.apache.commons.math3.exception.TooManyEvaluationsException;
-import org.apache.commons.math3.optim.InitialGuess;
-import org.apache.commons.math3.optim.MaxEval;
-import org.apache.commons.math3.optim.SimpleBounds;
-import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
-import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
-import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.CMAESOptimizer;
-import org.apache.commons.math3.random.MersenneTwister;
+import org.hipparchus.exception.LocalizedCoreFormats;
+import org.hipparchus.exception.MathIllegalStateException;
+import org.hipparchus.optim.InitialGuess;
+import org.hipparchus.optim.MaxEval;
+import org.hipparchus.optim.SimpleBounds;
+import org.hipparchus.optim.nonlinear.scalar.GoalType;
+import org.hipparchus.optim.nonlinear.scalar.ObjectiveFunction;
+import org.hipparchus.optim.nonlinear.scalar.noderiv.CMAESOptimizer;
+import org.hipparchus.random.MersenneTwister;
 
 /**
  * The cheap global stage: CMA-ES (N. Hansen, A. Ostermeier, "Completely derandomized
- * self-adaptation in evolution strategies", Evol. Comput. 9, 159–195, 2001; Commons Math 3.6.1
+ * self-adaptation in evolution strategies", Evol. Comput. 9, 159–195, 2001; Hipparchus 4.0.1
  * implementation) over the fit coordinates, bounded around the starting values, with a fixed
  * seed, minimizing the sum of squared B residuals. Stops at its evaluation budget and hands on the
  * best point it saw.
@@ -50,8 +51,11 @@ final class CmaesGlobalSearch {
             optimizer.optimize(new MaxEval(budget), objective, GoalType.MINIMIZE, new InitialGuess(start),
                     new SimpleBounds(lower, upper), new CMAESOptimizer.Sigma(sigma),
                     new CMAESOptimizer.PopulationSize(POPULATION));
-        } catch (TooManyEvaluationsException budgetSpent) {
+        } catch (MathIllegalStateException stopped) {
             // The budget is the stopping rule; the residual remembers the best point.
+            if (stopped.getSpecifier() != LocalizedCoreFormats.MAX_COUNT_EXCEEDED) {
+                throw stopped;
+            }
         }
         return residual.best();
     }

@@ -5,7 +5,7 @@ import org.kneepoint.fitter.error.BadInputException;
 /**
  * Simulates any history of applied field: starts demagnetized (H = 0, M = 0), moves to the first
  * field and then through the rest in order, restarting the integration at every point, so every
- * reversal of H starts a new branch (DESIGN §4). Covers the initial curve, major and minor loops
+ * reversal of H starts a new branch (docs/design.md §4). Covers the initial curve, major and minor loops
  * and recoil from any point.
  */
 public final class HysteresisSimulator {

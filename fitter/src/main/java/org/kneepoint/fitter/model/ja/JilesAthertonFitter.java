@@ -7,11 +7,18 @@ import java.util.Arrays;
  * B residuals of the fixed-step model ({@link FixedStepLoopEvaluator}) in three stages: starting
  * values from the Jiles–Thoelke–Devine relations ({@link JilesAthertonStartingValues}) and a
  * seeded CMA-ES global search, both on a thinned copy of the data ({@link LoopThinning}), then
- * Levenberg–Marquardt least squares on every point; then standard errors and correlations. Deterministic for given data and settings. Bad data (a single branch offered as
+ * Levenberg–Marquardt least squares on every point at the evaluator's fine step (about 1e-6·Ms of
+ * integration error whatever the point spacing); then standard errors and correlations. Deterministic for given data and settings. Bad data (a single branch offered as
  * a loop, noise, too few points, NaN, flat data) are refused with a BadInputException before any
  * fitting, and every stage has a bounded budget.
  */
 public final class JilesAthertonFitter {
+
+    /**
+     * Steps per largest |H| in the cheap stages: an RK4 error of order 1e-4·Ms, enough to find the
+     * basin; the local stage then works at the evaluator's fine default.
+     */
+    static final int COARSE_STEPS_PER_LARGEST_FIELD = 50;
 
     private final JilesAthertonFitSettings settings;
 
@@ -38,7 +45,7 @@ public final class JilesAthertonFitter {
     private JilesAthertonFit identify(MeasuredLoop loop, FitProgress progress) {
         progress.report(0, FitStage.STARTING_VALUES);
         MeasuredLoop thinned = LoopThinning.thin(loop);
-        LoopResidual coarse = new LoopResidual(thinned);
+        LoopResidual coarse = new LoopResidual(thinned, COARSE_STEPS_PER_LARGEST_FIELD);
         JilesAthertonParameters start = JilesAthertonStartingValues.estimate(LoopFeatures.of(loop), coarse);
         double[] q = FitParameterization.toCoordinates(start);
         if (settings.globalEvaluations() > 0) {

@@ -1,7 +1,7 @@
 package org.kneepoint.fitter.model.ja;
 
 /**
- * The Jiles–Atherton differential susceptibility dM/dH in the binding form of DESIGN §4
+ * The Jiles–Atherton differential susceptibility dM/dH in the binding form of docs/design.md §4
  * (after Jiles, Atherton, J. Magn. Magn. Mater. 61, 48–60, 1986):
  * He = H + α·M; Man = Ms·L(He/a); X = (Man − M)/(δ·k) + c·dMan/dHe, δ = sign(dH); the
  * irreversible term (Man − M)/(δ·k) is 0 when δ·(Man − M) &lt; 0 (R. Venkataraman, PhD thesis,
@@ -62,7 +62,7 @@ public final class JilesAthertonModel {
      * single exponential and a single division lie on the critical path of an RK4 chain: with
      * e = exp(−2|x|) and D = |x|·(1 − e), L = N/D with N = (1 + e)·|x| − (1 − e),
      * L' = S/D² with S = (1 − e)² − 4e·x², and dM/dH = T/(D² − α·T) with
-     * T = D·max(0, δ·(Ms·N·sign x − m·D))/k + (c·Ms/a)·S. This is algebraically the DESIGN §4 form.
+     * T = D·max(0, δ·(Ms·N·sign x − m·D))/k + (c·Ms/a)·S. This is algebraically the docs/design.md §4 form.
      * The exponential is {@code NegativeExponential.of}, whose chain is shorter than that of Math.exp.
      * Multiply-adds ({@link Math#fma}, one rounding each) and a plain comparison for the floor of
      * the denominator keep the chain from x to dM/dH short; the direction is folded into the two

@@ -1,12 +1,12 @@
 package org.kneepoint.fitter.model.ja;
 
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.hipparchus.analysis.UnivariateFunction;
+import org.hipparchus.analysis.solvers.BrentSolver;
 
 /**
  * Starting values from the parameter-extraction relations of D. C. Jiles, J. B. Thoelke,
- * M. K. Devine, IEEE Trans. Magn. 28(1), 27–35 (1992), re-derived for the DESIGN §4 form
- * (REFERENCES §5a, from memory). Where the irreversible term acts, X = |Man − M|/k + c·dMan/dHe
+ * M. K. Devine, IEEE Trans. Magn. 28(1), 27–35 (1992), re-derived for the docs/design.md §4 form
+ * (docs/references.md §5a, from memory). Where the irreversible term acts, X = |Man − M|/k + c·dMan/dHe
  * and X = χ/(1 + α·χ) for a measured slope χ, so: at coercivity k = |Man(−Hc)|/(X − c·dMan);
  * at remanence Mr = Man(α·Mr) + k·(X − c·dMan), solved for α; at the tip
  * Ms = (Mm + k·X)/(L + k·c·L'/a). Just after the tip reversal only the reversible term acts,

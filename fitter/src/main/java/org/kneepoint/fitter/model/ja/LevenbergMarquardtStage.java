@@ -1,14 +1,14 @@
 package org.kneepoint.fitter.model.ja;
 
-import org.apache.commons.math3.exception.TooManyEvaluationsException;
-import org.apache.commons.math3.exception.TooManyIterationsException;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
-import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer;
-import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
+import org.hipparchus.exception.LocalizedCoreFormats;
+import org.hipparchus.exception.MathIllegalStateException;
+import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
+import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer;
+import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 
 /**
  * The local stage: Levenberg–Marquardt (K. Levenberg 1944; D. W. Marquardt, J. SIAM 11, 431–441,
- * 1963; Commons Math 3.6.1, after Moré's MINPACK) on the B residuals in fit coordinates. The
+ * 1963; Hipparchus 4.0.1, after Moré's MINPACK) on the B residuals in fit coordinates. The
  * Jacobian is by forward differences with step {@value #STEP} in the log/logit coordinates —
  * a relative step of about 1e-6 in each parameter, which balances truncation (∝ step) against
  * round-off (∝ 1e-16/step) — and the model value and Jacobian are evaluated lazily, so rejected
@@ -54,7 +54,10 @@ final class LevenbergMarquardtStage {
             LeastSquaresOptimizer.Optimum optimum = optimizer.optimize(builder.build());
             residual.modelled(optimum.getPoint().toArray());
             return new Result(residual.best(), optimum.getIterations());
-        } catch (TooManyIterationsException | TooManyEvaluationsException limitReached) {
+        } catch (MathIllegalStateException stopped) {
+            if (stopped.getSpecifier() != LocalizedCoreFormats.MAX_COUNT_EXCEEDED) {
+                throw stopped;
+            }
             return new Result(residual.best(), limit);
         }
     }

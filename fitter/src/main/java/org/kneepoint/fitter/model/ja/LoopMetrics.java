@@ -2,7 +2,7 @@ package org.kneepoint.fitter.model.ja;
 
 /**
  * Figures of the loop 0 → +Hmax → −Hmax → +Hmax started demagnetized, read on the descending
- * branch (coercivities positive, DESIGN §4).
+ * branch (coercivities positive, docs/design.md §4).
  *
  * @param hMax         turning field Hmax, A/m
  * @param hc           H at M = 0, as a positive number, A/m (0 when M ≤ 0 already at H = 0)

@@ -17,8 +17,18 @@ final class LoopResidual {
     private double[] best;
     private double bestSumOfSquares = Double.POSITIVE_INFINITY;
 
+    /** Residuals at the evaluator's default (fine) step. */
     LoopResidual(MeasuredLoop loop) {
-        this.evaluator = new FixedStepLoopEvaluator(loop);
+        this(new FixedStepLoopEvaluator(loop), loop);
+    }
+
+    /** Residuals at a step of 1/{@code stepsPerLargestField} of the largest |H|. */
+    LoopResidual(MeasuredLoop loop, int stepsPerLargestField) {
+        this(new FixedStepLoopEvaluator(loop, stepsPerLargestField), loop);
+    }
+
+    private LoopResidual(FixedStepLoopEvaluator evaluator, MeasuredLoop loop) {
+        this.evaluator = evaluator;
         this.measured = loop.fluxDensity();
     }
 

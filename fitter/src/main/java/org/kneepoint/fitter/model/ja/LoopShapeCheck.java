@@ -3,7 +3,7 @@ package org.kneepoint.fitter.model.ja;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
-import org.apache.commons.math3.stat.correlation.SpearmansCorrelation;
+import org.hipparchus.stat.correlation.SpearmansCorrelation;
 import org.kneepoint.fitter.error.BadInputException;
 
 /**
@@ -61,7 +61,7 @@ final class LoopShapeCheck {
                 Arrays.stream(loop.priorField()).max().orElse(Double.NEGATIVE_INFINITY));
         if (!(highestField > 0) || !(Arrays.stream(loop.magnetization()).max().orElseThrow() > 0)) {
             throw new BadInputException("the history never reaches positive H and M (highest H " + highestField
-                    + " A/m); expected a sample magnetized along + (DESIGN §4)");
+                    + " A/m); expected a sample magnetized along + (docs/design.md §4)");
         }
         SpearmansCorrelation spearman = new SpearmansCorrelation();
         double weighted = 0;

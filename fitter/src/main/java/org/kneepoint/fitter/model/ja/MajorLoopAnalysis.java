@@ -2,10 +2,10 @@ package org.kneepoint.fitter.model.ja;
 
 import java.util.Arrays;
 import java.util.Comparator;
-import org.apache.commons.math3.analysis.UnivariateFunction;
-import org.apache.commons.math3.analysis.integration.gauss.GaussIntegrator;
-import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactory;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.hipparchus.analysis.UnivariateFunction;
+import org.hipparchus.analysis.integration.gauss.GaussIntegrator;
+import org.hipparchus.analysis.integration.gauss.GaussIntegratorFactory;
+import org.hipparchus.analysis.solvers.BrentSolver;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.units.MagneticConstant;
 

@@ -29,7 +29,7 @@ public record Trajectory(double[] field, double[] magnetization) {
         return magnetization.clone();
     }
 
-    /** B = μ0·(H + M) at each point, tesla (DESIGN §4). */
+    /** B = μ0·(H + M) at each point, tesla (docs/design.md §4). */
     public double[] fluxDensity() {
         double[] b = new double[field.length];
         for (int i = 0; i < b.length; i++) {

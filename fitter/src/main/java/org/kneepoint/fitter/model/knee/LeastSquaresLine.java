@@ -1,6 +1,9 @@
 package org.kneepoint.fitter.model.knee;
 
-/** Ordinary least-squares line and parabola through (x, y) points, for temperature coefficients. */
+import org.hipparchus.fitting.PolynomialCurveFitter;
+import org.hipparchus.fitting.WeightedObservedPoints;
+
+/** Ordinary least-squares line and parabola (Hipparchus's polynomial fitter) through (x, y) points, for temperature coefficients. */
 final class LeastSquaresLine {
 
     private LeastSquaresLine() {
@@ -20,11 +23,11 @@ final class LeastSquaresLine {
 
     /** Coefficients {c0, c1, c2} of y ≈ c0 + c1·(x − x0) + c2·(x − x0)², least squares (needs 3 distinct x). */
     static double[] parabola(double[] x, double[] y, double x0) {
-        org.apache.commons.math3.fitting.WeightedObservedPoints points = new org.apache.commons.math3.fitting.WeightedObservedPoints();
+        WeightedObservedPoints points = new WeightedObservedPoints();
         for (int i = 0; i < x.length; i++) {
             points.add(x[i] - x0, y[i]);
         }
-        return org.apache.commons.math3.fitting.PolynomialCurveFitter.create(2).fit(points.toList());
+        return PolynomialCurveFitter.create(2).fit(points.toList());
     }
 
     /** Coefficients {c0, c1} of y ≈ c0 + c1·(x − x0), least squares. */

@@ -2,7 +2,6 @@ package org.kneepoint.fitter.model.knee;
 
 import static org.kneepoint.fitter.units.MagneticConstant.MU0;
 
-import org.kneepoint.fitter.loadline.LinearRecoilKnee;
 
 /** (BH)max of a knee model: the maximum of −H·(μ0·H + J(H)) between HcB and 0, by golden-section search. */
 final class ModelEnergyProduct {
@@ -12,7 +11,7 @@ final class ModelEnergyProduct {
     private ModelEnergyProduct() {
     }
 
-    static double maximum(LinearRecoilKnee model) {
+    static double maximum(KneeCurve model) {
         double left = model.operatingField(0.0, 0.0);
         double right = 0.0;
         for (int i = 0; i < 200 && right - left > 1e-10 * -model.operatingField(0.0, 0.0); i++) {
@@ -27,7 +26,7 @@ final class ModelEnergyProduct {
         return product(model, 0.5 * (left + right));
     }
 
-    private static double product(LinearRecoilKnee model, double h) {
+    private static double product(KneeCurve model, double h) {
         return -h * (MU0 * h + model.j(h));
     }
 }

@@ -10,18 +10,21 @@ import org.kneepoint.fitter.error.BadInputException;
  * Builds a grade's temperature model: one knee fit per curve, then {@link FittedTemperatureModel}
  * and the coefficients of {@link TemperatureFit}. Needs curves at two or more distinct temperatures.
  * T0 is 20 °C when the model reaches it; when the data lie too far above or below it, they say otherwise
- * (DESIGN §4) and T0 is the measured temperature nearest to 20 °C, so that every check's reference and
+ * (docs/design.md §4) and T0 is the measured temperature nearest to 20 °C, so that every check's reference and
  * its search for a maximum working temperature stay inside the model's range.
  */
 public final class TemperatureModelFitter {
 
-    /** T0 when the data do not say otherwise: 20 °C (DESIGN §4). */
+    /** T0 when the data do not say otherwise: 20 °C (docs/design.md §4). */
     public static final double DEFAULT_REFERENCE_K = 293.15;
 
     private TemperatureModelFitter() {
     }
 
     public static TemperatureFit fit(List<DemagnetizationCurve> curves) {
+        if (curves.size() < 2) {
+            throw new BadInputException("a temperature model needs curves at two or more temperatures, got " + curves.size());
+        }
         List<KneeFit> fits = new ArrayList<>();
         for (DemagnetizationCurve curve : curves) {
             if (curve.temperatureK() == null) {

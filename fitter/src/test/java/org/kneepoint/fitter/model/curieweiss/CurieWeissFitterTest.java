@@ -58,7 +58,7 @@ class CurieWeissFitterTest {
         assertTrue(fit.parameters().weissTemperature() < fit.temperatureMin());
     }
 
-    // Water, χ_SI = −9.04e-6 at 20 °C (REFERENCES §8, secondary), taken as temperature-independent here.
+    // Water, χ_SI = −9.04e-6 at 20 °C (docs/references.md §8, secondary), taken as temperature-independent here.
     @Test
     void a_temperature_independent_diamagnet_is_classified_without_a_curie_term() {
         Random random = new Random(3L);

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 
 class JilesAthertonFitterTest {
 
-    // REFERENCES §5b (Jiles & Atherton 1986, secondary) as the true parameters of synthetic data.
+    // docs/references.md §5b (Jiles & Atherton 1986, secondary) as the true parameters of synthetic data.
     private static final JilesAthertonParameters TRUTH = JilesAthertonPhysicsTest.SOFT_IRON;
     private static final double H_MAX = 5000;
     private static final int POINTS = 1200;

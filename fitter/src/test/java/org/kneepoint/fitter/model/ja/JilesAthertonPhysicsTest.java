@@ -3,13 +3,13 @@ package org.kneepoint.fitter.model.ja;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.hipparchus.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
 import org.kneepoint.fitter.units.MagneticConstant;
 
 class JilesAthertonPhysicsTest {
 
-    // REFERENCES §5b: Ms, a, k, c, α attributed to Jiles & Atherton (1986), read in a secondary source.
+    // docs/references.md §5b: Ms, a, k, c, α attributed to Jiles & Atherton (1986), read in a secondary source.
     static final JilesAthertonParameters SOFT_IRON = new JilesAthertonParameters(1.6e6, 1100, 400, 0.2, 1.6e-3);
 
     // Jiles, Thoelke, Devine, IEEE Trans. Magn. 28(1), 27 (1992): χan = Ms/(3a − α·Ms) (from memory, re-derived).
@@ -23,7 +23,7 @@ class JilesAthertonPhysicsTest {
         assertEquals(ms / (3 * SOFT_IRON.a() - SOFT_IRON.alpha() * ms), m / h, 1e-6 * (m / h));
     }
 
-    // Same source: χin = c·Ms/(3a), with coupling c·Ms/(3a − c·α·Ms) (REFERENCES §5a, from memory, re-derived).
+    // Same source: χin = c·Ms/(3a), with coupling c·Ms/(3a − c·α·Ms) (docs/references.md §5a, from memory, re-derived).
     @Test
     void initial_susceptibility_is_c_ms_over_three_a_minus_c_alpha_ms() {
         HysteresisSimulator simulator = HysteresisSimulator.adaptive(SOFT_IRON);
@@ -37,7 +37,7 @@ class JilesAthertonPhysicsTest {
         assertEquals(c * 1.6e6 / 3300, m0 / h, 1e-3 * c * 1.6e6 / 3300);
     }
 
-    // Jiles & Atherton (1986), REFERENCES §5a: with c = 1 the magnetization is purely reversible and
+    // Jiles & Atherton (1986), docs/references.md §5a: with c = 1 the magnetization is purely reversible and
     // follows the anhysteretic M = Man(H + α·M) on the way up and on the way down.
     @Test
     void with_c_equal_to_one_there_is_no_hysteresis() {
@@ -106,7 +106,7 @@ class JilesAthertonPhysicsTest {
         assertEquals(MagneticConstant.MU0 * (5000 + metrics.mMax()), metrics.bMax(), 1e-15);
     }
 
-    // Recoil (DESIGN §4, linear-recoil picture; Jiles & Atherton 1986 for the model): after a partial reversal
+    // Recoil (docs/design.md §4, linear-recoil picture; Jiles & Atherton 1986 for the model): after a partial reversal
     // to H1 < 0 on the falling major branch, returning to H = 0 recovers only part of the remanence.
     @Test
     void recoil_from_the_second_quadrant_loses_remanence_irreversibly() {

@@ -10,7 +10,6 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.fitter.loadline.LinearRecoilKnee;
 
 class TemperatureModelFitterTest {
 
@@ -22,7 +21,7 @@ class TemperatureModelFitterTest {
         for (int i = 0; i < CELSIUS.length; i++) {
             double br = 1.27 * (1 - 0.0012 * (CELSIUS[i] - 20));
             double hcj = 2.0e6 * Math.exp(-0.0055 * (CELSIUS[i] - 20));
-            DemagnetizationCurve curve = KneeFitterTest.sampled(h -> KneeFitterTest.multiplicativeKnee(h, br, 1.05, hcj, 0.03 * hcj),
+            DemagnetizationCurve curve = DemagnetizationForms.sampled(h -> KneeFitterTest.multiplicativeKnee(h, br, 1.05, hcj, 0.03 * hcj),
                     5e4, -1.02 * hcj, 400, noise, 7 + i);
             curves.add(curve.withTemperatureK(CELSIUS[i] + 273.15));
         }
@@ -52,7 +51,7 @@ class TemperatureModelFitterTest {
         TemperatureFit fit = TemperatureModelFitter.fit(curves);
         for (int i = 0; i < curves.size(); i++) {
             DemagnetizationCurve curve = curves.get(i);
-            LinearRecoilKnee model = fit.model().at(curve.temperatureK());
+            KneeCurve model = fit.model().at(curve.temperatureK());
             KneeFit own = fit.fits().get(i);
             double[] h = curve.h();
             double[] j = curve.values();
