@@ -7,6 +7,7 @@ import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
+import org.kneepoint.importer.input.Excerpt;
 
 /**
  * One header cell such as {@code H [kOe]}: the quantity letter and its unit. H is a field
@@ -24,11 +25,11 @@ record ColumnHeader(char letter, Unit unit, String text) {
     static ColumnHeader parse(String cell, InputLocation at) {
         Matcher matcher = CELL.matcher(cell);
         if (!matcher.matches()) {
-            throw new BadInputException(at, "expected a column name with its unit in brackets such as 'H [kA/m]', got '" + cell.strip() + "'");
+            throw new BadInputException(at, "expected a column name with its unit in brackets such as 'H [kA/m]', got '" + Excerpt.of(cell) + "'");
         }
         String name = matcher.group(1);
         if (name.length() != 1 || LETTERS.indexOf(name.charAt(0)) < 0) {
-            throw new BadInputException(at, "unknown column '" + name + "'; expected H, B, J, M or T with a unit, such as 'J [T]'");
+            throw new BadInputException(at, "unknown column '" + Excerpt.of(name) + "'; expected H, B, J, M or T with a unit, such as 'J [T]'");
         }
         char letter = name.charAt(0);
         Dimension dimension = dimensionOf(letter);
@@ -37,10 +38,10 @@ record ColumnHeader(char letter, Unit unit, String text) {
         }
         String unitText = matcher.group(2).strip();
         Unit unit = UnitCatalog.find(unitText, dimension).orElseThrow(() -> new BadInputException(at,
-                "column " + name + ": expected " + dimension.expectation() + ", got '" + unitText + "'"
+                "column " + name + ": expected " + dimension.expectation() + ", got '" + Excerpt.of(unitText) + "'"
                         + UnitCatalog.dimensionOf(unitText).map(other -> " (a " + other.description() + " unit)")
                                 .orElse(" (not a unit Kneepoint knows)")));
-        return new ColumnHeader(letter, unit, cell.strip());
+        return new ColumnHeader(letter, unit, Excerpt.of(cell));
     }
 
     private static Dimension dimensionOf(char letter) {

@@ -2,8 +2,6 @@ package org.kneepoint.importer.csv;
 
 import static org.kneepoint.fitter.units.MagneticConstant.MU0;
 
-import java.io.BufferedReader;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -13,12 +11,16 @@ import org.kneepoint.fitter.curve.CurveKind;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
+import org.kneepoint.fitter.limits.PhysicalLimits;
 import org.kneepoint.fitter.units.Dimension;
+import org.kneepoint.importer.input.InputFile;
+import org.kneepoint.importer.plausible.PlausibleInput;
 
 /**
  * Reads a curve file (see the package description) into SI curves. Every problem is reported
  * with the file name, line and column and what was expected; nothing is guessed. A file with a
- * temperature column holds one curve per distinct temperature.
+ * temperature column holds one curve per distinct temperature. Every curve must be plausible
+ * ({@link org.kneepoint.fitter.limits.CurvePlausibility}).
  */
 public final class CurveFileReader {
 
@@ -30,15 +32,18 @@ public final class CurveFileReader {
 
     /** Reads a file from disk after checking its size against the limit. */
     public CurveFile read(Path path) {
-        Collector collector = new Collector(path.getFileName().toString());
-        TableScanner.scan(path, limits, collector);
-        return collector.result();
+        return read(InputFile.load(path, limits.maxBytes()));
+    }
+
+    /** Reads a file already in memory. */
+    public CurveFile read(InputFile file) {
+        return read(file.source(), file.text());
     }
 
     /** Reads curve-file text; {@code source} names it in messages. */
-    public CurveFile read(String source, BufferedReader reader) throws IOException {
-        Collector collector = new Collector(source);
-        TableScanner.scan(source, reader, collector);
+    public static CurveFile read(String source, String text) {
+        CurveTableCollector collector = collector(source);
+        TableScanner.scan(source, text, collector);
         return collector.result();
     }
 
@@ -67,6 +72,9 @@ public final class CurveFileReader {
 
         @Override
         public void header(String[] cells, Delimiter delimiter, int line) {
+            if (layout != null) {
+                throw new BadInputException(InputLocation.line(source, line), "a second header; a file has one header row");
+            }
             this.layout = TableLayout.of(source, line, cells);
             this.delimiter = delimiter;
         }
@@ -82,12 +90,17 @@ public final class CurveFileReader {
             if (layout.magnetization()) {
                 value = MU0 * value;
             }
-            Double temperature = layout.temperatureColumn() < 0 ? null : number(line, cells, layout.temperatureColumn());
-            if (temperature != null && !(temperature > 0)) {
-                throw new BadInputException(InputLocation.cell(source, line, layout.temperatureColumn() + 1,
-                        layout.name(layout.temperatureColumn())), "temperature must be above absolute zero");
-            }
+            Double temperature = layout.temperatureColumn() < 0 ? null : temperature(line, cells);
             groups.computeIfAbsent(temperature, key -> new PointColumns()).add(h, value, line);
+        }
+
+        private double temperature(int line, String[] cells) {
+            double temperature = number(line, cells, layout.temperatureColumn());
+            InputLocation at = InputLocation.cell(source, line, layout.temperatureColumn() + 1, layout.name(layout.temperatureColumn()));
+            if (!(temperature > 0)) {
+                throw new BadInputException(at, "temperature must be above absolute zero");
+            }
+            return PlausibleInput.within(at, "temperature", temperature, PhysicalLimits.CURVE_TEMPERATURE);
         }
 
         private double number(int line, String[] cells, int column) {
@@ -97,8 +110,9 @@ public final class CurveFileReader {
         @Override
         public CurveFile result() {
             CurveMetadata meta = new CurveMetadata(metadata.text("grade"), metadata.text("family"), metadata.text("supplier"),
-                    metadata.quantity("density", Dimension.DENSITY), metadata.quantity("temperature", Dimension.TEMPERATURE), metadata.choice("kind", CurveMetadata.KINDS),
-                    metadata.text("source"), metadata.text("notes"));
+                    metadata.quantity("density", Dimension.DENSITY, PhysicalLimits.DENSITY),
+                    metadata.quantity("temperature", Dimension.TEMPERATURE, PhysicalLimits.CURVE_TEMPERATURE),
+                    metadata.choice("kind", CurveMetadata.KINDS), metadata.text("source"), metadata.text("notes"));
             CurveKind kind = CurveKinds.of(source, meta.kind(), layout.quantity());
             if (meta.temperatureK() != null && layout.temperatureColumn() >= 0) {
                 throw new BadInputException(InputLocation.of(source), "the temperature is given both as metadata and as a T column; keep one");
@@ -110,7 +124,8 @@ public final class CurveFileReader {
                     ConflictingDuplicates.check(source, points, layout.quantity());
                 }
                 Double temperature = group.getKey() != null ? group.getKey() : meta.temperatureK();
-                curves.add(new DemagnetizationCurve(kind, layout.quantity(), points.h(), points.values(), temperature));
+                DemagnetizationCurve curve = new DemagnetizationCurve(kind, layout.quantity(), points.h(), points.values(), temperature);
+                curves.add(PlausibleInput.curve(curve, new CurvePlaces(source, layout, points, metadata.line("temperature"))::of));
             }
             return new CurveFile(source, meta, curves);
         }

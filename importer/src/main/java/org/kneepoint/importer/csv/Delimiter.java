@@ -30,23 +30,8 @@ public enum Delimiter {
         return this != COMMA;
     }
 
-    /** The cells of a line, empty cells kept. */
-    String[] split(String line) {
-        int count = 1;
-        for (int i = 0; i < line.length(); i++) {
-            if (line.charAt(i) == character) {
-                count++;
-            }
-        }
-        String[] cells = new String[count];
-        int start = 0;
-        for (int cell = 0; cell < count - 1; cell++) {
-            int end = line.indexOf(character, start);
-            cells[cell] = line.substring(start, end);
-            start = end + 1;
-        }
-        cells[count - 1] = line.substring(start);
-        return cells;
+    char character() {
+        return character;
     }
 
     String word() {

@@ -8,7 +8,7 @@ import org.kneepoint.fitter.units.SusceptibilityForm;
  * (SI), and the (T, χ) points in SI of the table's form.
  */
 public record SusceptibilityTable(String source, String material, Double density, Double molarMass, String sourceText,
-        String notes, SusceptibilityForm form, List<double[]> points) {
+        String notes, SusceptibilityForm form, List<double[]> points) implements FileContent {
 
     /** Metadata keys of a susceptibility table. */
     public static final List<String> KEYS = List.of("material", "density", "molar-mass", "source", "notes");

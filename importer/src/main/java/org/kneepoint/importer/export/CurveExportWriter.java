@@ -4,9 +4,7 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import org.kneepoint.fitter.curve.CurveTable;
 
 /**
@@ -42,28 +40,23 @@ public final class CurveExportWriter {
     }
 
     public static String json(ExportHeader header, CurveTable table, ExportUnits units) {
-        Map<String, Object> document = new LinkedHashMap<>();
-        document.put("grade", header.grade());
-        document.put("family", header.family());
-        document.put("temperature", header.temperatureK() + " K");
-        document.put("kind", header.kind());
-        if (header.source() != null) {
-            document.put("source", header.source());
+        try {
+            return JSON.writeValueAsString(document(header, table, units)) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot write the export as JSON", e);
         }
-        document.put("notes", header.notes());
-        document.put("columns", columns(table, units));
+    }
+
+    /** The JSON export as a record. */
+    private static CurveExportDocument document(ExportHeader header, CurveTable table, ExportUnits units) {
         double[] h = table.h();
         double[] values = table.values();
         List<double[]> rows = new ArrayList<>(h.length);
         for (int i = 0; i < h.length; i++) {
             rows.add(new double[] {units.field().fromSi(h[i]), units.flux().fromSi(values[i])});
         }
-        document.put("rows", rows);
-        try {
-            return JSON.writeValueAsString(document) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("cannot write the export as JSON", e);
-        }
+        return new CurveExportDocument(header.grade(), header.family(), header.temperatureK() + " K", header.kind(), header.source(),
+                header.notes(), columns(table, units), rows);
     }
 
     private static List<String> columns(CurveTable table, ExportUnits units) {

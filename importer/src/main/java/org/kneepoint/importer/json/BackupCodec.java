@@ -1,20 +1,12 @@
 package org.kneepoint.importer.json;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
-import java.time.Instant;
-import java.util.ArrayList;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import org.kneepoint.fitter.curve.CurveKind;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
-import org.kneepoint.fitter.curve.Quantity;
-import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.library.FitRecord;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.ImportInfo;
@@ -32,7 +24,8 @@ import org.kneepoint.fitter.units.SusceptibilityForm;
 public final class BackupCodec {
 
     public static final String FORMAT = "kneepoint-library-backup";
-    public static final int VERSION = 1;
+    /** Version 2 adds specifications, lots and lot curves; version 1 documents (without them) are still read. */
+    public static final int VERSION = 2;
 
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
@@ -48,6 +41,9 @@ public final class BackupCodec {
         document.put("curves", snapshot.curves().stream().map(BackupCodec::curveJson).toList());
         document.put("susceptibility", snapshot.susceptibility().stream().map(BackupCodec::susceptibilityJson).toList());
         document.put("fits", snapshot.fits().stream().map(BackupCodec::fitJson).toList());
+        document.put("specifications", snapshot.specifications().stream().map(QualificationJson::specification).toList());
+        document.put("lots", snapshot.lots().stream().map(QualificationJson::lot).toList());
+        document.put("lotCurves", snapshot.lotCurves().stream().map(QualificationJson::lotCurve).toList());
         try {
             return MAPPER.writeValueAsString(document) + "\n";
         } catch (JsonProcessingException e) {
@@ -119,59 +115,11 @@ public final class BackupCodec {
         return json;
     }
 
-    /** Reads a backup document; {@code source} names it in messages. */
+    /**
+     * Reads a backup document; {@code source} names it in messages. Anything an import would refuse
+     * is refused here too, naming the path of the element at fault.
+     */
     public static LibrarySnapshot read(String source, String text) {
-        JsonNode root;
-        try {
-            root = MAPPER.readTree(text);
-        } catch (JsonProcessingException e) {
-            var at = e.getLocation();
-            throw new BadInputException(InputLocation.cell(source, Math.max(0, at == null ? 0 : at.getLineNr()),
-                    Math.max(0, at == null ? 0 : at.getColumnNr()), null), "not valid JSON: " + e.getOriginalMessage());
-        }
-        if (root == null || !FORMAT.equals(root.path("format").asText()) || root.path("version").asInt() != VERSION) {
-            throw new BadInputException(InputLocation.of(source), "not a Kneepoint backup (expected \"format\": \"" + FORMAT
-                    + "\", \"version\": " + VERSION + ")");
-        }
-        BackupFields fields = new BackupFields(source);
-        try {
-            List<ImportInfo> imports = new ArrayList<>();
-            for (JsonNode node : fields.array(root, "imports")) {
-                imports.add(new ImportInfo(fields.text(node, "fileName"), fields.text(node, "sha256"),
-                        Instant.parse(fields.text(node, "importedAt")), node.path("curves").asInt(), node.path("points").asInt(),
-                        node.path("susceptibilityPoints").asInt()));
-            }
-            List<GradeInfo> grades = new ArrayList<>();
-            for (JsonNode node : fields.array(root, "grades")) {
-                grades.add(new GradeInfo(fields.text(node, "name"), fields.text(node, "family"), fields.optionalText(node, "supplier"),
-                        fields.optionalNumber(node, "density"), fields.optionalText(node, "notes"), fields.optionalText(node, "provenance"),
-                        fields.optionalNumber(node, "price")));
-            }
-            List<LibraryCurve> curves = new ArrayList<>();
-            for (JsonNode node : fields.array(root, "curves")) {
-                DemagnetizationCurve curve = new DemagnetizationCurve(
-                        CurveKind.valueOf(fields.text(node, "kind").toUpperCase(Locale.ROOT)), Quantity.valueOf(fields.text(node, "quantity")),
-                        fields.numbers(node, "h"), fields.numbers(node, "values"), fields.optionalNumber(node, "temperatureK"));
-                curves.add(new LibraryCurve(fields.text(node, "grade"), curve, fields.optionalText(node, "source"),
-                        fields.optionalText(node, "importSha256")));
-            }
-            List<SusceptibilityPoint> susceptibility = new ArrayList<>();
-            for (JsonNode node : fields.array(root, "susceptibility")) {
-                susceptibility.add(new SusceptibilityPoint(fields.text(node, "material"), fields.number(node, "temperatureK"),
-                        fields.number(node, "chi"), SusceptibilityForm.valueOf(fields.text(node, "form").toUpperCase(Locale.ROOT)),
-                        fields.optionalNumber(node, "density"), fields.optionalNumber(node, "molarMass"),
-                        fields.optionalText(node, "source"), fields.optionalText(node, "importSha256")));
-            }
-            List<FitRecord> fits = new ArrayList<>();
-            for (JsonNode node : fields.array(root, "fits")) {
-                fits.add(new FitRecord(fields.optionalText(node, "grade"), fields.optionalNumber(node, "curveTemperatureK"),
-                        fields.optionalText(node, "curveKind"), fields.optionalText(node, "material"), fields.text(node, "model"),
-                        fields.text(node, "parameters"), fields.optionalNumber(node, "residual"),
-                        Instant.parse(fields.text(node, "fittedAt")), fields.text(node, "programVersion")));
-            }
-            return new LibrarySnapshot(imports, grades, curves, susceptibility, fits);
-        } catch (IllegalArgumentException | java.time.format.DateTimeParseException e) {
-            throw new BadInputException(InputLocation.of(source), "invalid backup content: " + e.getMessage());
-        }
+        return new BackupReader(source).read(text);
     }
 }
