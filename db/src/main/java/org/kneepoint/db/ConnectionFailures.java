@@ -8,11 +8,11 @@ import javax.sql.DataSource;
 import org.jooq.ExecuteContext;
 import org.jooq.ExecuteListener;
 import org.jooq.impl.DataSourceConnectionProvider;
-import org.kneepoint.fitter.error.UnavailableException;
 
 /**
- * Recognizes a refused, lost or timed-out connection to the library's database and turns it into
- * an {@link UnavailableException} naming the database and the reason, in one place for reads
+ * Recognizes a refused, lost or timed-out connection to the library's database, or a fault of its
+ * files ({@link StorageFault}: locked, read-only, full), and turns it into an
+ * {@link UnavailableException} naming the database and the reason, in one place for reads
  * (through jOOQ's execute listener and connection provider) and writes (see {@link LibraryWriter}).
  * Everything else passes through unchanged.
  */
@@ -26,11 +26,22 @@ final class ConnectionFailures implements ExecuteListener {
 
     /** The failure as an {@link UnavailableException} when it is a connection failure, else itself. */
     RuntimeException translate(RuntimeException failure) {
-        if (failure instanceof UnavailableException || !isConnectionFailure(failure)) {
+        if (failure instanceof UnavailableException || failure instanceof DamagedDataException) {
+            return failure;
+        }
+        var fault = StorageFault.of(failure);
+        if (fault.isPresent()) {
+            return fault.get().toException(location, failure);
+        }
+        var damage = FileDamage.of(location, failure);
+        if (damage.isPresent()) {
+            return damage.get();
+        }
+        if (!isConnectionFailure(failure)) {
             return failure;
         }
         return new UnavailableException("the library database at " + location.describe() + " cannot be reached ("
-                + reason(failure) + "); nothing of this request was kept, try again when it is back", failure);
+                + location.withoutPassword(reason(failure)) + "); nothing of this request was kept, try again when it is back", failure);
     }
 
     @Override

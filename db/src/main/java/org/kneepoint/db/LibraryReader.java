@@ -5,20 +5,34 @@ import static org.kneepoint.db.jooq.Tables.CURVE_PIECE;
 import static org.kneepoint.db.jooq.Tables.FIT;
 import static org.kneepoint.db.jooq.Tables.GRADE;
 import static org.kneepoint.db.jooq.Tables.IMPORT_RECORD;
+import static org.kneepoint.db.jooq.Tables.LOT;
+import static org.kneepoint.db.jooq.Tables.LOT_CURVE;
+import static org.kneepoint.db.jooq.Tables.LOT_CURVE_PIECE;
 import static org.kneepoint.db.jooq.Tables.MATERIAL_FAMILY;
+import static org.kneepoint.db.jooq.Tables.SPECIFICATION;
+import static org.kneepoint.db.jooq.Tables.SPECIFICATION_LIMIT;
 import static org.kneepoint.db.jooq.Tables.SUSCEPTIBILITY_POINT;
 
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Function;
 import org.jooq.Condition;
 import org.jooq.DSLContext;
 import org.jooq.Record;
 import org.jooq.Table;
 import org.jooq.impl.DSL;
+import org.kneepoint.db.jooq.tables.records.CurvePieceRecord;
+import org.kneepoint.db.jooq.tables.records.CurveRecord;
+import org.kneepoint.db.jooq.tables.records.GradeRecord;
+import org.kneepoint.db.jooq.tables.records.ImportRecordRecord;
+import org.kneepoint.db.jooq.tables.records.MaterialFamilyRecord;
+import org.kneepoint.db.jooq.tables.records.SusceptibilityPointRecord;
 import org.kneepoint.fitter.curve.CurveKind;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.curve.Quantity;
@@ -32,40 +46,74 @@ import org.kneepoint.fitter.library.StoredGrade;
 import org.kneepoint.fitter.library.SusceptibilityPoint;
 import org.kneepoint.fitter.units.SusceptibilityForm;
 
-/** Reads the library into its value types, always in a fixed order. */
+/**
+ * Reads the library into its value types, always in a fixed order. Every row is checked against
+ * its checksum as it is read ({@link CheckedRows}): damaged stored data are a
+ * {@link DamagedDataException} naming the grade and curve, never a wrong number.
+ */
 public final class LibraryReader {
 
-    private final DSLContext dsl;
+    private final DSLContext pool;
 
-    LibraryReader(DSLContext dsl) {
-        this.dsl = dsl;
+    LibraryReader(DSLContext pool) {
+        this.pool = pool;
+    }
+
+    /** Runs a read of several statements in one {@link Snapshot}, over checked rows and checked {@link RowCounts}. */
+    private <T> T read(Function<CheckedRows, T> read) {
+        return Snapshot.read(pool, dsl -> {
+            T result = read.apply(new CheckedRows(dsl, CheckedRows.refusing()));
+            RowCounts.check(dsl);
+            return result;
+        });
     }
 
     /** Every grade (of one family, when given), by name, with the temperatures of its curves. */
     public List<GradeSummary> grades(String family) {
-        Condition filter = family == null ? DSL.noCondition() : MATERIAL_FAMILY.NAME.eq(family);
+        return read(rows -> grades(rows, family));
+    }
+
+    private static List<GradeSummary> grades(CheckedRows rows, String family) {
+        Map<Long, MaterialFamilyRecord> families = rows.families(DSL.noCondition());
+        Condition filter = family == null ? DSL.noCondition()
+                : GRADE.FAMILY_ID.in(families.values().stream().filter(f -> f.getName().equals(family)).map(MaterialFamilyRecord::getId).toList());
         Map<Long, List<Double>> temperatures = new LinkedHashMap<>();
         Map<Long, Integer> curveCounts = new LinkedHashMap<>();
-        dsl.select(CURVE.GRADE_ID, CURVE.TEMPERATURE_K).from(CURVE).orderBy(CURVE.GRADE_ID, CURVE.TEMPERATURE_K)
-                .forEach(row -> {
-                    List<Double> list = temperatures.computeIfAbsent(row.value1(), id -> new ArrayList<>());
-                    if (list.isEmpty() || !list.get(list.size() - 1).equals(row.value2())) {
-                        list.add(row.value2());
-                    }
-                    curveCounts.merge(row.value1(), 1, Integer::sum);
-                });
-        List<GradeSummary> grades = new ArrayList<>();
-        dsl.select(GRADE.ID, GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER, GRADE.PRICE).from(GRADE)
-                .join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
-                .where(filter).orderBy(GRADE.NAME)
-                .forEach(row -> grades.add(new GradeSummary(row.value2(), row.value3(), row.value4(),
-                        temperatures.getOrDefault(row.value1(), List.of()), curveCounts.getOrDefault(row.value1(), 0), row.value5())));
-        return grades;
+        List<GradeRecord> grades = rows.grades(filter);
+        for (CurveRecord curve : rows.curveHeads(DSL.noCondition())) {
+            List<Double> list = temperatures.computeIfAbsent(curve.getGradeId(), id -> new ArrayList<>());
+            if (list.isEmpty() || !list.get(list.size() - 1).equals(curve.getTemperatureK())) {
+                list.add(curve.getTemperatureK());
+            }
+            curveCounts.merge(curve.getGradeId(), 1, Integer::sum);
+        }
+        return grades.stream().map(grade -> new GradeSummary(grade.getName(), rows.familyName(grade, families), grade.getSupplier(),
+                temperatures.getOrDefault(grade.getId(), List.of()), curveCounts.getOrDefault(grade.getId(), 0), grade.getPrice())).toList();
+    }
+
+    /** The stamp of every grade, by name: one query, without the curves' points. */
+    public Map<String, GradeStamp> gradeStamps() {
+        return stamps(DSL.noCondition());
+    }
+
+    /** The stamp of one grade (empty when there is no such grade). */
+    public Optional<GradeStamp> gradeStamp(String name) {
+        return Optional.ofNullable(stamps(GRADE.NAME.eq(name)).get(name));
+    }
+
+    private Map<String, GradeStamp> stamps(Condition condition) {
+        Map<String, GradeStamp> stamps = new HashMap<>();
+        pool.select(GRADE.NAME, GRADE.ID, GRADE.ROW_VERSION, DSL.count(CURVE.ID), DSL.max(CURVE.ID))
+                .from(GRADE).leftJoin(CURVE).on(CURVE.GRADE_ID.eq(GRADE.ID)).where(condition)
+                .groupBy(GRADE.NAME, GRADE.ID, GRADE.ROW_VERSION)
+                .forEach(row -> stamps.put(row.value1(), new GradeStamp(row.value2(), row.value3(), row.value4(),
+                        row.value5() == null ? 0 : row.value5())));
+        return stamps;
     }
 
     /** The names of the families, alphabetically. */
     public List<String> families() {
-        return dsl.select(MATERIAL_FAMILY.NAME).from(MATERIAL_FAMILY).orderBy(MATERIAL_FAMILY.NAME).fetch(MATERIAL_FAMILY.NAME);
+        return read(rows -> rows.families(DSL.noCondition())).values().stream().map(MaterialFamilyRecord::getName).toList();
     }
 
     public Optional<GradeInfo> grade(String name) {
@@ -74,135 +122,132 @@ public final class LibraryReader {
 
     /** The grade with the row version an edit of it must name. */
     public Optional<StoredGrade> storedGrade(String name) {
-        return gradeRows(GRADE.NAME.eq(name)).stream().findFirst();
+        return read(rows -> gradeRows(rows, GRADE.NAME.eq(name))).stream().findFirst();
     }
 
-    private List<StoredGrade> gradeRows(Condition condition) {
-        return dsl.select(GRADE.NAME, MATERIAL_FAMILY.NAME, GRADE.SUPPLIER, GRADE.DENSITY, GRADE.NOTES, GRADE.PROVENANCE,
-                        GRADE.PRICE, GRADE.ROW_VERSION)
-                .from(GRADE).join(MATERIAL_FAMILY).on(GRADE.FAMILY_ID.eq(MATERIAL_FAMILY.ID))
-                .where(condition).orderBy(GRADE.NAME)
-                .fetch(row -> new StoredGrade(new GradeInfo(row.value1(), row.value2(), row.value3(), row.value4(), row.value5(),
-                        row.value6(), row.value7()), row.value8()));
+    private static List<StoredGrade> gradeRows(CheckedRows rows, Condition condition) {
+        List<GradeRecord> grades = rows.grades(condition);
+        Map<Long, MaterialFamilyRecord> families = rows.families(MATERIAL_FAMILY.ID.in(grades.stream().map(GradeRecord::getFamilyId).toList()));
+        return grades.stream().map(row -> new StoredGrade(new GradeInfo(row.getName(), rows.familyName(row, families), row.getSupplier(),
+                row.getDensity(), row.getNotes(), row.getProvenance(), row.getPrice()), row.getRowVersion())).toList();
     }
 
     /** The curves of a grade, by temperature and kind, with their points in stored order. */
     public List<LibraryCurve> curves(String grade) {
-        return curveRows(GRADE.NAME.eq(grade));
+        return read(rows -> {
+            List<GradeRecord> found = rows.grades(GRADE.NAME.eq(grade));
+            return found.isEmpty() ? List.<LibraryCurve>of() : curveRows(rows, CURVE.GRADE_ID.eq(found.get(0).getId()));
+        });
     }
 
-    private List<LibraryCurve> curveRows(Condition condition) {
-        List<CurveRow> rows = dsl.select(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.QUANTITY, CURVE.SOURCE, CURVE.POINT_COUNT,
-                        CURVE.H_VALUES, CURVE.MEASURED_VALUES, IMPORT_RECORD.SHA256, CURVE.ID)
-                .from(CURVE).join(GRADE).on(CURVE.GRADE_ID.eq(GRADE.ID))
-                .leftJoin(IMPORT_RECORD).on(CURVE.IMPORT_ID.eq(IMPORT_RECORD.ID))
-                .where(condition).orderBy(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, CURVE.ID)
-                .fetch(row -> {
-                    CurveRow curve = new CurveRow(row.value10(), row.value1(), row.value2(),
-                            CurveKind.valueOf(row.value3().toUpperCase(Locale.ROOT)), Quantity.valueOf(row.value4()), row.value5(),
-                            row.value9(), row.value6());
-                    curve.append(row.value7(), row.value8());
-                    return curve;
-                });
-        Map<Long, CurveRow> unfinished = new LinkedHashMap<>();
-        rows.stream().filter(row -> !row.complete()).forEach(row -> unfinished.put(row.id(), row));
-        if (!unfinished.isEmpty()) {
-            dsl.select(CURVE_PIECE.CURVE_ID, CURVE_PIECE.H_VALUES, CURVE_PIECE.MEASURED_VALUES).from(CURVE_PIECE)
-                    .where(CURVE_PIECE.CURVE_ID.in(unfinished.keySet())).orderBy(CURVE_PIECE.CURVE_ID, CURVE_PIECE.PIECE)
-                    .forEach(piece -> unfinished.get(piece.value1()).append(piece.value2(), piece.value3()));
-        }
-        return rows.stream().map(CurveRow::curve).toList();
-    }
-
-    /** A curve being read: its row, then its pieces, appended in order until all points are there. */
-    private static final class CurveRow {
-
-        private final long id;
-        private final String grade;
-        private final double temperatureK;
-        private final CurveKind kind;
-        private final Quantity quantity;
-        private final String source;
-        private final String importSha256;
-        private final double[] h;
-        private final double[] values;
-        private int filled;
-
-        CurveRow(long id, String grade, double temperatureK, CurveKind kind, Quantity quantity, String source, String importSha256,
-                int points) {
-            this.id = id;
-            this.grade = grade;
-            this.temperatureK = temperatureK;
-            this.kind = kind;
-            this.quantity = quantity;
-            this.source = source;
-            this.importSha256 = importSha256;
-            this.h = new double[points];
-            this.values = new double[points];
-        }
-
-        long id() {
-            return id;
-        }
-
-        void append(byte[] hBytes, byte[] valueBytes) {
-            int end = PackedDoubles.unpackInto(hBytes, h, filled);
-            if (PackedDoubles.unpackInto(valueBytes, values, filled) != end) {
-                throw new IllegalStateException("a stored curve holds different numbers of H and measured values");
+    private static List<LibraryCurve> curveRows(CheckedRows rows, Condition condition) {
+        List<CurveRecord> curves = rows.curves(condition);
+        Map<Long, ImportRecordRecord> imports = rows.imports(IMPORT_RECORD.ID.in(curves.stream().map(CurveRecord::getImportId)
+                .filter(java.util.Objects::nonNull).distinct().toList()));
+        List<CurveRecord> unfinished = curves.stream().filter(curve -> curve.getHValues().length / Double.BYTES < curve.getPointCount()).toList();
+        Map<Long, List<CurvePieceRecord>> pieces = rows.pieces(unfinished);
+        List<LibraryCurve> read = new ArrayList<>();
+        for (CurveRecord row : curves) {
+            String what = rows.describe(row);
+            String importSha256 = rows.importSha256(row.getImportId(), imports, what);
+            double[] h = new double[row.getPointCount()];
+            double[] values = new double[row.getPointCount()];
+            int filled = PackedDoubles.unpackInto(row.getHValues(), h, 0, what);
+            if (PackedDoubles.unpackInto(row.getMeasuredValues(), values, 0, what) != filled) {
+                throw new DamagedDataException(DamagedDataException.message(what + " holds different numbers of H and measured values"));
             }
-            filled = end;
-        }
-
-        boolean complete() {
-            return filled == h.length;
-        }
-
-        LibraryCurve curve() {
-            if (!complete()) {
-                throw new IllegalStateException("a stored curve of " + h.length + " points has only " + filled);
+            int expected = 1;
+            for (CurvePieceRecord piece : pieces.getOrDefault(row.getId(), List.of())) {
+                if (piece.getPiece() != expected++) {
+                    throw new DamagedDataException(DamagedDataException.message(what + " lacks piece " + (expected - 1) + " of its points"));
+                }
+                int end = PackedDoubles.unpackInto(piece.getHValues(), h, filled, what);
+                if (PackedDoubles.unpackInto(piece.getMeasuredValues(), values, filled, what) != end) {
+                    throw new DamagedDataException(DamagedDataException.message(what + " holds different numbers of H and measured values"));
+                }
+                filled = end;
             }
-            return new LibraryCurve(grade, new DemagnetizationCurve(kind, quantity, h, values, temperatureK), source, importSha256);
+            if (filled != h.length) {
+                throw new DamagedDataException(DamagedDataException.message(what + " holds " + filled + " of its " + h.length + " points"));
+            }
+            read.add(new LibraryCurve(rows.gradeName(row.getGradeId()), new DemagnetizationCurve(
+                    CurveKind.valueOf(row.getKind().toUpperCase(Locale.ROOT)), Quantity.valueOf(row.getQuantity()), h, values,
+                    row.getTemperatureK()), row.getSource(), importSha256));
         }
+        return read;
     }
 
     public Optional<ImportInfo> importWithChecksum(String sha256) {
-        return imports(IMPORT_RECORD.SHA256.eq(sha256)).stream().findFirst();
+        return read(rows -> imports(rows, IMPORT_RECORD.SHA256.eq(sha256))).stream().findFirst();
     }
 
-    private List<ImportInfo> imports(Condition condition) {
-        return dsl.selectFrom(IMPORT_RECORD).where(condition).orderBy(IMPORT_RECORD.IMPORTED_AT, IMPORT_RECORD.SHA256)
-                .fetch(row -> new ImportInfo(row.getFileName(), row.getSha256(), row.getImportedAt().toInstant(),
-                        row.getCurveCount(), row.getPointCount(), row.getSusceptibilityCount()));
+    private static List<ImportInfo> imports(CheckedRows rows, Condition condition) {
+        return rows.imports(condition).values().stream()
+                .map(row -> new ImportInfo(row.getFileName(), row.getSha256(), row.getImportedAt().toInstant(),
+                        row.getCurveCount(), row.getPointCount(), row.getSusceptibilityCount())).toList();
     }
 
     /** Susceptibility points of one material (or all when null), by material and temperature. */
     public List<SusceptibilityPoint> susceptibility(String material) {
-        Condition condition = material == null ? DSL.noCondition() : SUSCEPTIBILITY_POINT.MATERIAL.eq(material);
-        return dsl.select(SUSCEPTIBILITY_POINT.asterisk(), IMPORT_RECORD.SHA256).from(SUSCEPTIBILITY_POINT)
-                .leftJoin(IMPORT_RECORD).on(SUSCEPTIBILITY_POINT.IMPORT_ID.eq(IMPORT_RECORD.ID))
-                .where(condition)
-                .orderBy(SUSCEPTIBILITY_POINT.MATERIAL, SUSCEPTIBILITY_POINT.TEMPERATURE_K, SUSCEPTIBILITY_POINT.ID)
-                .fetch(row -> new SusceptibilityPoint(row.get(SUSCEPTIBILITY_POINT.MATERIAL), row.get(SUSCEPTIBILITY_POINT.TEMPERATURE_K),
-                        row.get(SUSCEPTIBILITY_POINT.CHI), SusceptibilityForm.valueOf(row.get(SUSCEPTIBILITY_POINT.FORM).toUpperCase(Locale.ROOT)),
-                        row.get(SUSCEPTIBILITY_POINT.DENSITY), row.get(SUSCEPTIBILITY_POINT.MOLAR_MASS),
-                        row.get(SUSCEPTIBILITY_POINT.SOURCE), row.get(IMPORT_RECORD.SHA256)));
+        return read(rows -> susceptibility(rows, material == null ? DSL.noCondition() : SUSCEPTIBILITY_POINT.MATERIAL.eq(material)));
+    }
+
+    private static List<SusceptibilityPoint> susceptibility(CheckedRows rows, Condition condition) {
+        List<SusceptibilityPointRecord> points = rows.susceptibility(condition);
+        Map<Long, ImportRecordRecord> imports = rows.imports(IMPORT_RECORD.ID.in(points.stream().map(SusceptibilityPointRecord::getImportId)
+                .filter(java.util.Objects::nonNull).distinct().toList()));
+        return points.stream().map(row -> new SusceptibilityPoint(row.getMaterial(), row.getTemperatureK(), row.getChi(),
+                SusceptibilityForm.valueOf(row.getForm().toUpperCase(Locale.ROOT)), row.getDensity(), row.getMolarMass(), row.getSource(),
+                rows.importSha256(row.getImportId(), imports, "the susceptibility point of '" + row.getMaterial() + "'"))).toList();
     }
 
     /** Fits, by time. */
     public List<FitRecord> fits() {
-        return dsl.select(GRADE.NAME, CURVE.TEMPERATURE_K, CURVE.KIND, FIT.MATERIAL, FIT.MODEL, FIT.PARAMETERS, FIT.RESIDUAL,
-                        FIT.FITTED_AT, FIT.PROGRAM_VERSION)
-                .from(FIT).leftJoin(GRADE).on(FIT.GRADE_ID.eq(GRADE.ID)).leftJoin(CURVE).on(FIT.CURVE_ID.eq(CURVE.ID))
-                .orderBy(FIT.FITTED_AT, FIT.ID)
-                .fetch(row -> new FitRecord(row.value1(), row.value2(), row.value3(), row.value4(), row.value5(), row.value6(),
-                        row.value7(), row.value8().toInstant(), row.value9()));
+        return read(LibraryReader::fits);
+    }
+
+    private static List<FitRecord> fits(CheckedRows rows) {
+        List<org.kneepoint.db.jooq.tables.records.FitRecord> fits = rows.fits();
+        Map<Long, CurveRecord> curves = new LinkedHashMap<>();
+        rows.curveHeads(CURVE.ID.in(fits.stream().map(org.kneepoint.db.jooq.tables.records.FitRecord::getCurveId)
+                .filter(java.util.Objects::nonNull).distinct().toList())).forEach(curve -> curves.put(curve.getId(), curve));
+        return fits.stream().map(row -> {
+            CurveRecord curve = row.getCurveId() == null ? null : curves.get(row.getCurveId());
+            if (row.getCurveId() != null && curve == null) {
+                throw new DamagedDataException(DamagedDataException.message("a stored fit names a curve that is not stored"));
+            }
+            return new FitRecord(row.getGradeId() == null ? null : rows.gradeName(row.getGradeId()),
+                    curve == null ? null : curve.getTemperatureK(), curve == null ? null : curve.getKind(), row.getMaterial(), row.getModel(),
+                    row.getParameters(), row.getResidual(), row.getFittedAt().toInstant(), row.getProgramVersion());
+        }).toList();
     }
 
     /** Everything, in the fixed order of {@link LibrarySnapshot}. */
     public LibrarySnapshot snapshot() {
-        return new LibrarySnapshot(imports(DSL.noCondition()), gradeRows(DSL.noCondition()).stream().map(StoredGrade::grade).toList(),
-                curveRows(DSL.noCondition()),
-                susceptibility(null), fits());
+        return Snapshot.read(pool, dsl -> {
+            CheckedRows rows = new CheckedRows(dsl, CheckedRows.refusing());
+            QualificationReader qualification = new QualificationReader(dsl);
+            LibrarySnapshot snapshot = new LibrarySnapshot(imports(rows, DSL.noCondition()),
+                    gradeRows(rows, DSL.noCondition()).stream().map(StoredGrade::grade).toList(),
+                    sortedByGrade(rows, curveRows(rows, DSL.noCondition())), susceptibility(rows, DSL.noCondition()), fits(rows),
+                    qualification.specifications(null), qualification.lots(null), qualification.lotCurves(null));
+            RowCounts.check(dsl);
+            return snapshot;
+        });
+    }
+
+    /** Curves in the order of their grades as read (by name), then as read (temperature, kind, id): the snapshot's order. */
+    private static List<LibraryCurve> sortedByGrade(CheckedRows rows, List<LibraryCurve> curves) {
+        Map<String, Integer> rank = new HashMap<>();
+        rows.gradeOrder().forEach(name -> rank.putIfAbsent(name, rank.size()));
+        List<LibraryCurve> sorted = new ArrayList<>(curves);
+        sorted.sort(Comparator.comparingInt(curve -> rank.getOrDefault(curve.grade(), Integer.MAX_VALUE)));
+        return sorted;
+    }
+
+    /** Whether every row of the library has been checked and found sound: see {@link LibraryVerifier}. */
+    public VerifyReport verify() {
+        return Snapshot.read(pool, dsl -> new LibraryVerifier(dsl).run());
     }
 
     public boolean isEmpty() {
@@ -211,10 +256,12 @@ public final class LibraryReader {
 
     /** Row count of every table, for checks that a failed write left nothing behind. */
     public Map<String, Integer> rowCounts() {
-        Map<String, Integer> counts = new LinkedHashMap<>();
-        for (Table<? extends Record> table : List.of(IMPORT_RECORD, MATERIAL_FAMILY, GRADE, CURVE, CURVE_PIECE, SUSCEPTIBILITY_POINT, FIT)) {
-            counts.put(table.getName(), dsl.fetchCount(table));
-        }
-        return counts;
+        return Snapshot.read(pool, dsl -> {
+            Map<String, Integer> counts = new LinkedHashMap<>();
+            for (Table<? extends Record> table : RowCounts.TABLES) {
+                counts.put(table.getName(), dsl.fetchCount(table));
+            }
+            return counts;
+        });
     }
 }

@@ -2,7 +2,7 @@ package org.kneepoint.db;
 
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.locks.ReentrantLock;
+import java.util.concurrent.locks.Lock;
 import org.jooq.DSLContext;
 import org.jooq.exception.DataAccessException;
 import org.jooq.impl.DSL;
@@ -10,10 +10,13 @@ import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.fitter.library.FitRecord;
 import org.kneepoint.fitter.library.GradeDetails;
 import org.kneepoint.fitter.library.GradeInfo;
+import org.kneepoint.fitter.library.GradeSpecification;
 import org.kneepoint.fitter.library.ImportBatch;
 import org.kneepoint.fitter.library.ImportInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.fitter.library.LibrarySnapshot;
+import org.kneepoint.fitter.library.LotCurve;
+import org.kneepoint.fitter.library.LotInfo;
 import org.kneepoint.fitter.library.SusceptibilityPoint;
 
 /**
@@ -29,10 +32,10 @@ public final class LibraryWriter {
     private static final int ATTEMPTS = 4;
 
     private final DSLContext dsl;
-    private final ReentrantLock turn;
+    private final Lock turn;
     private final ConnectionFailures failures;
 
-    LibraryWriter(DSLContext dsl, ReentrantLock turn, ConnectionFailures failures) {
+    LibraryWriter(DSLContext dsl, Lock turn, ConnectionFailures failures) {
         this.dsl = dsl;
         this.turn = turn;
         this.failures = failures;
@@ -92,6 +95,23 @@ public final class LibraryWriter {
             for (FitRecord fit : snapshot.fits()) {
                 rows.insertFit(fit);
             }
+            QualificationRows qualification = new QualificationRows(rows.context());
+            for (GradeSpecification specification : snapshot.specifications()) {
+                qualification.writeSpecification(requireGrade(gradeIds, specification.grade()), specification.specification(),
+                        specification.version());
+            }
+            Map<String, Long> lotIds = new java.util.HashMap<>();
+            for (LotInfo lot : snapshot.lots()) {
+                lotIds.put(lot.grade() + "\n" + lot.name(), qualification.ensureLot(requireGrade(gradeIds, lot.grade()), lot));
+            }
+            for (LotCurve curve : snapshot.lotCurves()) {
+                Long lotId = lotIds.get(curve.grade() + "\n" + curve.lot());
+                if (lotId == null) {
+                    throw new IllegalArgumentException("curve of lot '" + curve.lot() + "' comes without its lot");
+                }
+                qualification.insertLotCurve(lotId, curve, rows.importId(curve.importSha256()));
+            }
+            QualificationChecksums.seal(rows.context());
         });
     }
 
@@ -119,12 +139,17 @@ public final class LibraryWriter {
         return id;
     }
 
-    private void inTransaction(java.util.function.Consumer<RowWriter> work) {
+    void inTransaction(java.util.function.Consumer<RowWriter> work) {
         turn.lock();
         try {
             for (int attempt = 1; ; attempt++) {
                 try {
-                    dsl.transaction(configuration -> work.accept(new RowWriter(DSL.using(configuration))));
+                    dsl.transaction(configuration -> {
+                        DSLContext tx = DSL.using(configuration);
+                        RowCounts.takeWriteLock(tx);
+                        work.accept(new RowWriter(tx));
+                        RowCounts.seal(tx);
+                    });
                     return;
                 } catch (DataAccessException e) {
                     if (attempt == ATTEMPTS || !ConcurrentWrites.lostRace(e)) {

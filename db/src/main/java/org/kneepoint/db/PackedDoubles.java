@@ -23,11 +23,15 @@ final class PackedDoubles {
         return buffer.array();
     }
 
-    /** Copies the packed values into {@code values} from {@code offset}; returns the offset after them. */
-    static int unpackInto(byte[] bytes, double[] values, int offset) {
+    /**
+     * Copies the packed values into {@code values} from {@code offset}; returns the offset after
+     * them. Bytes that cannot be the curve's points are damage to {@code what}.
+     */
+    static int unpackInto(byte[] bytes, double[] values, int offset, String what) {
         int count = bytes.length / Double.BYTES;
         if (bytes.length % Double.BYTES != 0 || offset + count > values.length) {
-            throw new IllegalStateException("a stored curve holds " + bytes.length + " bytes at point " + offset + " of " + values.length);
+            throw new DamagedDataException(DamagedDataException.message(what + " holds " + bytes.length + " bytes of points at point "
+                    + offset + " of " + values.length));
         }
         ByteBuffer.wrap(bytes).order(ByteOrder.BIG_ENDIAN).asDoubleBuffer().get(values, offset, count);
         return offset + count;

@@ -25,6 +25,15 @@ class DatabaseLocationTest {
     }
 
     @Test
+    void the_home_folder_is_home_from_the_environment_before_the_accounts_own() {
+        Path elsewhere = Path.of("invented-elsewhere").toAbsolutePath();
+        assertEquals("jdbc:h2:file:" + elsewhere.resolve(".kneepoint").resolve("kneepoint"),
+                DatabaseLocation.resolve(null, Map.of("HOME", elsewhere.toString()), HOME).jdbcUrl());
+        assertEquals("jdbc:h2:file:" + HOME.resolve(".kneepoint").resolve("kneepoint"),
+                DatabaseLocation.resolve(null, Map.of("HOME", ""), HOME).jdbcUrl(), "an empty HOME is no home");
+    }
+
+    @Test
     void credentials_come_from_the_environment_and_are_never_shown() {
         Map<String, String> environment = Map.of("KNEEPOINT_DB_USER", "team", "KNEEPOINT_DB_PASSWORD", "s3cret-pass");
         DatabaseLocation location = DatabaseLocation.resolve("jdbc:postgresql://db.invented/magnets", environment, HOME);
@@ -43,11 +52,15 @@ class DatabaseLocationTest {
     }
 
     @Test
-    void a_password_in_the_environment_url_is_accepted_but_masked() {
+    void a_password_in_the_environment_url_is_taken_out_of_the_url_and_never_shown() {
         DatabaseLocation location = DatabaseLocation.resolve(null,
-                Map.of("KNEEPOINT_DB", "jdbc:postgresql://db.invented/magnets?user=team&password=s3cret-pass"), HOME);
-        assertEquals("jdbc:postgresql://db.invented/magnets?user=team&password=***", location.describe());
-        assertNull(location.password());
+                Map.of("KNEEPOINT_DB", "jdbc:postgresql://db.invented/magnets?user=team&password=s3cret%2Dpass&ssl=true"), HOME);
+        assertEquals("jdbc:postgresql://db.invented/magnets?user=team&ssl=true", location.describe());
+        assertEquals("s3cret-pass", location.password(), "percent-decoded as the driver would read it");
+        DatabaseLocation h2 = DatabaseLocation.resolve(null, Map.of("KNEEPOINT_DB", "jdbc:h2:file:/tmp/x/kneepoint;user=kp;PASSWORD=s3cret"), HOME);
+        assertEquals("jdbc:h2:file:/tmp/x/kneepoint (as kp)", h2.describe());
+        assertEquals("s3cret", h2.password());
+        assertNull(DatabaseLocation.resolve(null, Map.of("KNEEPOINT_DB", "jdbc:h2:mem:x"), HOME).password());
     }
 
     @Test

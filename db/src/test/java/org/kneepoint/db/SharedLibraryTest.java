@@ -17,7 +17,6 @@ import org.junit.jupiter.params.provider.EnumSource;
 import org.kneepoint.db.TestLibraries.Engine;
 import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.fitter.error.NotFoundException;
-import org.kneepoint.fitter.error.UnavailableException;
 import org.kneepoint.fitter.library.GradeDetails;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
