@@ -17,7 +17,7 @@ import org.kneepoint.fitter.loadline.LoadLine;
 import org.kneepoint.fitter.loadline.TemperatureModel;
 import org.kneepoint.fitter.loadline.OperatingPoint;
 import org.kneepoint.fitter.units.MagneticConstant;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.app.wording.Temperatures;
 
 /**
  * The operating-point chart of a design check: the grade's B(H) (solid) and J(H) (dashed) at the check's

@@ -20,7 +20,7 @@ import org.kneepoint.fitter.curve.CurveCharacterizer;
 import org.kneepoint.fitter.curve.CurveKind;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
 import org.kneepoint.fitter.library.LibraryCurve;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.app.wording.Temperatures;
 
 /**
  * The demagnetization chart of a grade: B(H) solid and J(H) dashed at every stored temperature,

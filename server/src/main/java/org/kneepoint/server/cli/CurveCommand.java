@@ -3,24 +3,22 @@ package org.kneepoint.server.cli;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
+import java.util.stream.Collectors;
 import java.util.concurrent.Callable;
-import org.kneepoint.fitter.curve.Characterization;
-import org.kneepoint.fitter.curve.CurveCharacterizer;
-import org.kneepoint.fitter.curve.DemagnetizationCurve;
-import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.importer.csv.CurveFile;
 import org.kneepoint.importer.csv.CurveFileReader;
 import org.kneepoint.importer.csv.ReadLimits;
-import org.kneepoint.server.library.GradeCurve;
-import org.kneepoint.server.library.GradeCurves;
+import org.kneepoint.server.app.grades.GradeCurve;
+import org.kneepoint.server.app.grades.GradeCurves;
 import org.kneepoint.server.text.CharacterizationView;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.OneOrMany;
+import org.kneepoint.server.app.grades.CurveDocument;
+import org.kneepoint.server.app.grades.Grades;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 
 /**
@@ -45,8 +43,8 @@ final class CurveCommand implements Callable<Integer> {
     @picocli.CommandLine.Mixin
     private LibraryOption libraryOption;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--max-file-size", paramLabel = "BYTES", defaultValue = "" + ReadLimits.DEFAULT_MAX_BYTES,
             description = "Refuse files larger than this (default: ${DEFAULT-VALUE} bytes).")
@@ -63,25 +61,9 @@ final class CurveCommand implements Callable<Integer> {
                 curves.addAll(GradeCurves.at(library.reader(), target, temperatureK));
             }
         }
-        List<Map<String, Object>> documents = new ArrayList<>();
-        StringBuilder tables = new StringBuilder();
-        for (GradeCurve curve : curves) {
-            Characterization characterization = characterize(curve.grade(), curve.curve());
-            documents.add(CharacterizationView.json(curve, characterization));
-            tables.append(CharacterizationView.table(curve, characterization));
-        }
-        var out = spec.commandLine().getOut();
-        out.print(json ? Json.write(documents.size() == 1 ? documents.get(0) : documents) + System.lineSeparator() : tables);
-        out.flush();
+        List<CurveDocument> documents = Grades.characterize(curves);
+        output.print(spec.commandLine().getOut(), () -> OneOrMany.of(documents),
+                () -> documents.stream().map(CharacterizationView::table).collect(Collectors.joining()));
         return 0;
-    }
-
-    private static Characterization characterize(String source, DemagnetizationCurve curve) {
-        try {
-            return CurveCharacterizer.characterize(curve);
-        } catch (BadInputException e) {
-            String where = curve.temperatureK() == null ? source : source + " (curve at " + curve.temperatureK() + " K)";
-            throw new BadInputException(InputLocation.of(where), e.getMessage());
-        }
     }
 }

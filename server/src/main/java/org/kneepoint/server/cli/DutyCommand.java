@@ -1,12 +1,10 @@
 package org.kneepoint.server.cli;
 
-import java.util.List;
 import java.util.concurrent.Callable;
-import org.kneepoint.fitter.loadline.DutySequence;
-import org.kneepoint.fitter.loadline.DutyStepResult;
-import org.kneepoint.server.library.GradeModel;
+import org.kneepoint.server.app.design.DesignChecks;
+import org.kneepoint.server.app.design.DutyRequest;
+import org.kneepoint.server.app.design.DutyRun;
 import org.kneepoint.server.text.DutyView;
-import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -40,22 +38,19 @@ final class DutyCommand implements Callable<Integer> {
     private LibraryOption libraryOption;
 
     @Option(names = "--steps", required = true, converter = DutyStepsConverter.class,
-            description = "Steps TEMPERATURE:OPPOSING_FIELD separated by commas, e.g. \"20C:0, 150C:300kA/m, 20C:0\".")
+            description = "Steps TEMPERATURE:FIELD[:KIND] separated by commas, e.g. \"20C:0, 150C:300kA/m, 120C:200kA/m:external\";"
+                    + " KIND is opposing (default: circuit convention, B = −μ0·Pc·(H + Ha)) or external (uniform field on a free"
+                    + " magnet, H = −Hext − N·M, N = 1/(1 + Pc)).")
     private DutyStepsConverter.Steps steps;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units).")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Override
     public Integer call() {
-        double pc = loadLine.pc();
-        GradeModel model = grade.model(gradeName, libraryOption);
-        List<DutyStepResult> results = DutySequence.run(model.model(), pc, steps.list());
-        boolean extrapolated = steps.list().stream().anyMatch(step -> model.extrapolated().test(step.temperature()));
-        var out = spec.commandLine().getOut();
-        out.print(json ? Json.write(DutyView.json(pc, results, extrapolated)) + System.lineSeparator()
-                : DutyView.table(model.description(), loadLine.describe(), pc, results, extrapolated));
-        out.flush();
+        DutyRun run = DesignChecks.duty(new DutyRequest(grade.choice(gradeName), loadLine.spec(), steps.list()),
+                name -> GradeOptions.stored(name, libraryOption));
+        output.print(spec.commandLine().getOut(), run::document, () -> DutyView.table(run));
         return 0;
     }
 }

@@ -3,7 +3,7 @@ package org.kneepoint.server.cli;
 import java.util.List;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.loadline.DutyStep;
-import org.kneepoint.server.library.DutySteps;
+import org.kneepoint.server.app.design.DutySteps;
 import picocli.CommandLine;
 import picocli.CommandLine.TypeConversionException;
 

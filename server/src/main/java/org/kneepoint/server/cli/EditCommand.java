@@ -8,9 +8,9 @@ import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.StoredGrade;
-import org.kneepoint.server.library.GradeEdit;
-import org.kneepoint.server.text.GradeJson;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.grades.GradeEdit;
+import org.kneepoint.server.app.grades.GradeDocument;
+import org.kneepoint.server.app.Json;
 import org.kneepoint.server.text.PlainText;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -54,8 +54,8 @@ final class EditCommand implements Callable<Integer> {
             description = "The grade's version the edit was made from (as 'edit' or the API shows it). Default: the version now.")
     private Integer version;
 
-    @Option(names = "--json", description = "Print the grade after the edit as JSON.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Override
     public Integer call() {
@@ -72,7 +72,7 @@ final class EditCommand implements Callable<Integer> {
             edited = new GradeEdit(changes, "--%s").applyTo(library, grade, version);
         }
         var out = spec.commandLine().getOut();
-        out.println(json ? Json.write(GradeJson.details(edited)) : describe(edited));
+        out.println(output.json ? Json.write(GradeDocument.details(edited)) : describe(edited));
         out.flush();
         return 0;
     }

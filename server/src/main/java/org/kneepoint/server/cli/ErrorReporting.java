@@ -7,8 +7,10 @@ import picocli.CommandLine;
 /**
  * The one place where the CLI turns failures into output and exit codes: a single line on
  * standard error, no stack trace. Exit codes: 0 success; 2 bad input, unknown names, conflicts and
- * bad command-line arguments; 3 a computation that failed numerically; 4 the library's database
- * cannot be reached (nothing was written; run the command again when it is back); 1 an internal error (a
+ * bad command-line arguments, and damaged stored data (a
+ * value that failed its checksum); 3 a computation that failed numerically; 4 the library's database
+ * cannot be reached, another program holds it, its folder or file is read-only or its disk is full
+ * (nothing was written; run the command again when the cause is gone); 1 an internal error (a
  * bug: set {@code KNEEPOINT_DEBUG=1} to see its stack trace).
  */
 public final class ErrorReporting {
@@ -34,7 +36,7 @@ public final class ErrorReporting {
             return switch (known.code()) {
                 case NUMERICAL_FAILURE -> NUMERICAL_FAILURE;
                 case UNAVAILABLE -> UNAVAILABLE;
-                case BAD_INPUT, NOT_FOUND, CONFLICT -> BAD_INPUT;
+                case BAD_INPUT, NOT_FOUND, CONFLICT, DAMAGED -> BAD_INPUT;
             };
         }
         err.println("kneepoint: internal error: " + error);

@@ -1,12 +1,14 @@
 package org.kneepoint.server.cli;
 
+import org.kneepoint.server.app.version.VersionInfo;
+
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.curve.Quantity;
 import org.kneepoint.importer.export.ExportUnits;
-import org.kneepoint.server.library.CurveExport;
-import org.kneepoint.server.library.GradeCurves;
+import org.kneepoint.server.app.grades.CurveExport;
+import org.kneepoint.server.app.grades.GradeCurves;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;

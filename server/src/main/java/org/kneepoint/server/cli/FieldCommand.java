@@ -1,16 +1,11 @@
 package org.kneepoint.server.cli;
 
 import java.util.concurrent.Callable;
-import org.kneepoint.fitter.field.FieldVector;
 import org.kneepoint.fitter.field.MagnetField;
-import org.kneepoint.fitter.shape.BlockShape;
-import org.kneepoint.fitter.shape.CylinderShape;
 import org.kneepoint.fitter.shape.MagnetShape;
-import org.kneepoint.fitter.shape.RingShape;
-import org.kneepoint.server.library.Lengths;
-import org.kneepoint.server.library.Position;
+import org.kneepoint.server.app.design.FieldDocument;
+import org.kneepoint.server.app.design.Position;
 import org.kneepoint.server.text.FieldView;
-import org.kneepoint.server.text.Json;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -45,80 +40,61 @@ final class FieldCommand implements Runnable {
                 description = "The point x,y,z; a unit after the last number applies to all three, e.g. 2,0,3mm.")
         Position at;
 
-        @Option(names = "--json", description = "Print one JSON document (SI units).")
-        boolean json;
+        @Mixin
+        OutputOptions output;
 
         @Spec(Spec.Target.MIXEE)
         CommandSpec spec;
 
-        int print(MagnetShape shape, String description) {
+        int print(MagnetShapeOptions magnet, String kind) {
+            MagnetShape shape = magnet.shape(kind, false);
+            String description = magnet.describe(kind);
             MagnetField field = MagnetField.of(shape, br);
-            double[] point = {at.x(), at.y(), at.z()};
-            FieldVector b = field.fluxDensity(at.x(), at.y(), at.z());
-            var out = spec.commandLine().getOut();
-            out.print(json ? Json.write(FieldView.json(point, b)) + System.lineSeparator()
-                    : FieldView.table(description, point, b, field.isInside(at.x(), at.y(), at.z())));
-            out.flush();
+            output.print(spec.commandLine().getOut(), () -> FieldDocument.at(field, at), () -> FieldView.table(description,
+                    at.toArray(), field.sample(at.x(), at.y(), at.z()), field.isInside(at.x(), at.y(), at.z())));
             return 0;
         }
     }
 
     @Command(name = "cylinder", mixinStandardHelpOptions = true, description = "Axially magnetized solid cylinder, axis along z.")
     static final class Cylinder implements Callable<Integer> {
-        @Option(names = "--diameter", required = true, converter = LengthConverter.class, description = "Diameter, e.g. 10mm.")
-        double diameter;
-
-        @Option(names = "--length", required = true, converter = LengthConverter.class, description = "Length along z.")
-        double length;
+        @Mixin
+        MagnetShapeOptions magnet;
 
         @Mixin
         Point point;
 
         @Override
         public Integer call() {
-            return point.print(new CylinderShape(diameter, length), "cylinder D = " + Lengths.mm(diameter) + ", L = " + Lengths.mm(length));
+            return point.print(magnet, "cylinder");
         }
     }
 
     @Command(name = "ring", mixinStandardHelpOptions = true, description = "Axially magnetized ring, axis along z.")
     static final class Ring implements Callable<Integer> {
-        @Option(names = "--diameter", required = true, converter = LengthConverter.class, description = "Outer diameter.")
-        double diameter;
-
-        @Option(names = "--inner-diameter", required = true, converter = LengthConverter.class, description = "Bore.")
-        double innerDiameter;
-
-        @Option(names = "--length", required = true, converter = LengthConverter.class, description = "Length along z.")
-        double length;
+        @Mixin
+        MagnetShapeOptions magnet;
 
         @Mixin
         Point point;
 
         @Override
         public Integer call() {
-            return point.print(new RingShape(diameter, innerDiameter, length),
-                    "ring D = " + Lengths.mm(diameter) + ", Di = " + Lengths.mm(innerDiameter) + ", L = " + Lengths.mm(length));
+            return point.print(magnet, "ring");
         }
     }
 
     @Command(name = "block", mixinStandardHelpOptions = true, description = "Block with edges width, depth, thickness along x, y, z.")
     static final class Block implements Callable<Integer> {
-        @Option(names = "--width", required = true, converter = LengthConverter.class, description = "Edge along x.")
-        double width;
-
-        @Option(names = "--depth", required = true, converter = LengthConverter.class, description = "Edge along y.")
-        double depth;
-
-        @Option(names = "--thickness", required = true, converter = LengthConverter.class, description = "Edge along z, the magnetization.")
-        double thickness;
+        @Mixin
+        MagnetShapeOptions magnet;
 
         @Mixin
         Point point;
 
         @Override
         public Integer call() {
-            return point.print(new BlockShape(width, depth, thickness),
-                    "block " + Lengths.mm(width) + " × " + Lengths.mm(depth) + " × " + Lengths.mm(thickness));
+            return point.print(magnet, "block");
         }
     }
 }

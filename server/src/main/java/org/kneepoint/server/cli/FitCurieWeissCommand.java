@@ -1,5 +1,8 @@
 package org.kneepoint.server.cli;
 
+import org.kneepoint.server.app.fits.FitSaving;
+import org.kneepoint.server.app.fits.FitTarget;
+
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -9,8 +12,10 @@ import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.model.curieweiss.CurieWeissFit;
 import org.kneepoint.fitter.model.curieweiss.CurieWeissFitter;
 import org.kneepoint.server.text.CurieWeissFitView;
-import org.kneepoint.server.library.SusceptibilityData;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.grades.SusceptibilityData;
+import org.kneepoint.server.app.Json;
+import org.kneepoint.server.app.fits.CurieWeissFitDocument;
+import org.kneepoint.server.app.fits.CurieWeissFitParameters;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -33,8 +38,8 @@ final class FitCurieWeissCommand implements Callable<Integer> {
             description = "A susceptibility table (header such as 'T [K],chi [SI]'), else a material in the library.")
     private String target;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--save", description = "Store the fit in the library with its material (a file's material must be stored).")
     private boolean save;
@@ -53,16 +58,11 @@ final class FitCurieWeissCommand implements Callable<Integer> {
             CurieWeissFit fit = fit(data);
             if (save) {
                 library.writer().saveFit(FitSaving.record(null, null, null, data.material(), "curie-weiss",
-                        CurieWeissFitView.parameters(fit.parameters()), fit.rmsResidual()));
+                        CurieWeissFitParameters.of(fit.parameters()), fit.rmsResidual()));
             }
             var out = spec.commandLine().getOut();
-            if (json) {
-                var document = CurieWeissFitView.json(fit);
-                document.put("source", data.source());
-                document.put("material", data.material());
-                document.put("form", data.form().name().toLowerCase());
-                document.put("saved", save);
-                out.println(Json.write(document));
+            if (output.json) {
+                out.println(Json.write(CurieWeissFitDocument.of(data, fit, save)));
             } else {
                 out.print(CurieWeissFitView.table(data.source() + ": Curie–Weiss fit to " + data.material()
                         + (save ? " (saved to the library)" : ""), fit));

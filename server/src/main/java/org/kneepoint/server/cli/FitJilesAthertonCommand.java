@@ -1,5 +1,8 @@
 package org.kneepoint.server.cli;
 
+import org.kneepoint.server.app.fits.FitSaving;
+import org.kneepoint.server.app.fits.FitTarget;
+
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -10,10 +13,12 @@ import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityFormatter;
 import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
-import org.kneepoint.server.library.JilesAthertonFitData;
-import org.kneepoint.server.library.JilesAthertonFitRun;
+import org.kneepoint.server.app.fits.JilesAthertonFitData;
+import org.kneepoint.server.app.fits.JilesAthertonFitRun;
 import org.kneepoint.server.text.JilesAthertonFitView;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.Json;
+import org.kneepoint.server.app.fits.JilesAthertonFitDocument;
+import org.kneepoint.server.app.fits.JilesAthertonFitParameters;
 import org.kneepoint.server.text.ProgressBar;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -50,8 +55,8 @@ final class FitJilesAthertonCommand implements Callable<Integer> {
             description = "Field the sample was magnetized at before the data (needed for a second-quadrant curve), e.g. 3MA/m.")
     private Double magnetizingField;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--save", description = "Store the fit in the library with its grade (a file must name a stored grade).")
     private boolean save;
@@ -72,7 +77,7 @@ final class FitJilesAthertonCommand implements Callable<Integer> {
             if (save) {
                 library.writer().saveFit(FitSaving.record(data.grade(), data.curve().temperatureK(),
                         data.curve().kind().name().toLowerCase(), null, "ja",
-                        JilesAthertonFitView.parameters(fit.parameters()), fit.rmsB()));
+                        JilesAthertonFitParameters.of(fit.parameters()), fit.rmsB()));
             }
             print(data, fit);
         }
@@ -87,15 +92,15 @@ final class FitJilesAthertonCommand implements Callable<Integer> {
     }
 
     private JilesAthertonFit fit(JilesAthertonFitData data) {
-        FitProgress progress = json || System.console() == null ? FitProgress.ignore()
+        FitProgress progress = output.json || System.console() == null ? FitProgress.ignore()
                 : new ProgressBar(spec.commandLine().getErr(), System::nanoTime, "fit ja");
         return JilesAthertonFitRun.fit(data, progress);
     }
 
     private void print(JilesAthertonFitData data, JilesAthertonFit fit) {
         var out = spec.commandLine().getOut();
-        if (json) {
-            out.println(Json.write(JilesAthertonFitRun.json(data, fit, save)));
+        if (output.json) {
+            out.println(Json.write(JilesAthertonFitDocument.of(data, fit, save)));
         } else {
             String title = data.source() + ": Jiles–Atherton fit to the " + (data.isLoop() ? "loop" : "second-quadrant curve")
                     + (data.magnetizingField() == null ? "" : " after magnetizing at " + QuantityFormatter.format(data.magnetizingField(), KILO_AMPERE, 5))

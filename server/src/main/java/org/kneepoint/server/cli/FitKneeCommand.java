@@ -1,9 +1,11 @@
 package org.kneepoint.server.cli;
 
+import org.kneepoint.server.app.fits.FitSaving;
+import org.kneepoint.server.app.fits.KneeFitData;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.curve.DemagnetizationCurve;
@@ -11,7 +13,10 @@ import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.model.knee.KneeFit;
 import org.kneepoint.fitter.model.knee.KneeFitter;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.Json;
+import org.kneepoint.server.app.OneOrMany;
+import org.kneepoint.server.app.fits.KneeFitDocument;
+import org.kneepoint.server.app.fits.KneeFitParameters;
 import org.kneepoint.server.text.KneeFitView;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -35,8 +40,8 @@ final class FitKneeCommand implements Callable<Integer> {
             description = "Only the curve at this temperature, e.g. 120C.")
     private Double temperatureK;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--save", description = "Store the fits in the library with their grade and curves.")
     private boolean save;
@@ -51,19 +56,19 @@ final class FitKneeCommand implements Callable<Integer> {
             if (save) {
                 FitSaving.requireGrade(library, data.grade(), data.source());
             }
-            List<Map<String, Object>> documents = new ArrayList<>();
+            List<KneeFitDocument> documents = new ArrayList<>();
             StringBuilder tables = new StringBuilder();
             for (DemagnetizationCurve curve : selected(data)) {
                 KneeFit fit = fit(data.source(), curve);
                 if (save) {
                     library.writer().saveFit(FitSaving.record(data.grade(), curve.temperatureK(),
-                            curve.kind().name().toLowerCase(Locale.ROOT), null, "knee", KneeFitView.parameters(fit), fit.rmsJ()));
+                            curve.kind().name().toLowerCase(Locale.ROOT), null, "knee", KneeFitParameters.of(fit.model()), fit.rmsJ()));
                 }
-                documents.add(KneeFitView.json(fit));
+                documents.add(KneeFitDocument.of(fit));
                 tables.append(KneeFitView.table(data.source(), fit));
             }
             var out = spec.commandLine().getOut();
-            out.print(json ? Json.write(documents.size() == 1 ? documents.get(0) : documents) + System.lineSeparator()
+            out.print(output.json ? Json.write(OneOrMany.of(documents)) + System.lineSeparator()
                     : tables + (save ? "saved to the library\n" : ""));
             out.flush();
         }

@@ -1,12 +1,17 @@
 package org.kneepoint.server.cli;
 
+import org.kneepoint.server.app.fits.FitSaving;
+import org.kneepoint.server.app.fits.KneeFitData;
+
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.model.knee.TemperatureFit;
 import org.kneepoint.fitter.model.knee.TemperatureModelFitter;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.Json;
+import org.kneepoint.server.app.fits.TemperatureFitDocument;
+import org.kneepoint.server.app.fits.TemperatureFitParameters;
 import org.kneepoint.server.text.TemperatureFitView;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -26,8 +31,8 @@ final class FitTemperatureCommand implements Callable<Integer> {
     @Parameters(paramLabel = "FILE-or-GRADE", description = "A curve file with several temperatures, else a grade in the library.")
     private String target;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--save", description = "Store the fit in the library with its grade.")
     private boolean save;
@@ -50,10 +55,10 @@ final class FitTemperatureCommand implements Callable<Integer> {
             }
             if (save) {
                 library.writer().saveFit(FitSaving.record(data.grade(), null, null, null, "temperature",
-                        TemperatureFitView.parameters(fit), fit.fits().stream().mapToDouble(f -> f.rmsJ()).max().orElse(0)));
+                        TemperatureFitParameters.of(fit), fit.fits().stream().mapToDouble(f -> f.rmsJ()).max().orElse(0)));
             }
             var out = spec.commandLine().getOut();
-            out.print(json ? Json.write(TemperatureFitView.json(fit)) + System.lineSeparator()
+            out.print(output.json ? Json.write(TemperatureFitDocument.of(fit)) + System.lineSeparator()
                     : TemperatureFitView.table(data.source(), fit) + (save ? "saved to the library\n" : ""));
             out.flush();
         }

@@ -1,9 +1,9 @@
 package org.kneepoint.server.cli;
 
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.server.library.GradeModel;
-import org.kneepoint.server.library.TypedGrade;
+import org.kneepoint.server.app.design.GradeChoice;
+import org.kneepoint.server.app.design.GradeModel;
+import org.kneepoint.server.app.design.TypedGrade;
 import picocli.CommandLine.Option;
 
 /**
@@ -12,6 +12,10 @@ import picocli.CommandLine.Option;
  * library instead.
  */
 final class GradeOptions {
+
+    private static final GradeChoice.InputNames NAMES = new GradeChoice.InputNames("GRADE", "",
+            "--br, --mu-rec, --hcj, --knee, --alpha, --beta, --reference-temperature", "--br, --mu-rec and --hcj",
+            "--alpha and --beta");
 
     @Option(names = "--br", converter = QuantityConverters.FluxDensity.class,
             description = "Remanence Br at the reference temperature, e.g. 1.3T.")
@@ -30,29 +34,26 @@ final class GradeOptions {
     Double knee;
 
     @Option(names = "--alpha", converter = QuantityConverters.PercentPerKelvin.class,
-            description = "Temperature coefficient of Br, e.g. -0.12%%/K (default: 0%%/K).")
+            description = "Temperature coefficient of Br, e.g. -0.12%%/K; needed with --beta away from the reference temperature (0 allowed).")
     Double alpha;
 
     @Option(names = "--beta", converter = QuantityConverters.PercentPerKelvin.class,
-            description = "Temperature coefficient of HcJ, e.g. -0.6%%/K (default: 0%%/K).")
+            description = "Temperature coefficient of HcJ, e.g. -0.6%%/K; needed with --alpha away from the reference temperature (0 allowed).")
     Double beta;
 
     @Option(names = "--reference-temperature", converter = QuantityConverters.Temperature.class,
             description = "Temperature the values and coefficients refer to (default: 20C).")
     Double referenceTemperature;
 
-    /** The model of {@code grade} (null: the one typed in) from the library {@code libraryOption} names; never both. */
-    GradeModel model(String grade, LibraryOption libraryOption) {
-        TypedGrade typed = new TypedGrade(br, muRec, hcj, knee, alpha, beta, referenceTemperature);
-        if (grade == null) {
-            return GradeModel.typed(typed.law("name a GRADE of the library, or type one in with --br, --mu-rec and --hcj"));
-        }
-        if (typed.given()) {
-            throw new BadInputException("give either a GRADE of the library or the typed-in --br, --mu-rec, --hcj, --knee,"
-                    + " --alpha, --beta, --reference-temperature, not both");
-        }
+    /** The grade named on the command line ({@code name}, or null for the one typed in with these options). */
+    GradeChoice choice(String name) {
+        return new GradeChoice(name, new TypedGrade(br, muRec, hcj, knee, alpha, beta, referenceTemperature), NAMES);
+    }
+
+    /** A grade of the library {@code libraryOption} names, looked up only when the command names one. */
+    static GradeModel stored(String name, LibraryOption libraryOption) {
         try (Library library = libraryOption.open()) {
-            return GradeModel.stored(library.reader(), grade);
+            return GradeModel.stored(library.reader(), name);
         }
     }
 }

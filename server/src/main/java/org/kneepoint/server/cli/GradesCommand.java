@@ -1,16 +1,14 @@
 package org.kneepoint.server.cli;
 
-import java.util.ArrayList;
 import java.util.Locale;
 import java.util.List;
-import java.util.Map;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.library.GradeSummary;
-import org.kneepoint.server.text.GradeJson;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.grades.GradeRow;
+import org.kneepoint.server.app.grades.Grades;
+import org.kneepoint.server.app.Json;
 import org.kneepoint.server.text.PlainText;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.app.wording.Temperatures;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -30,29 +28,25 @@ final class GradesCommand implements Callable<Integer> {
     @Option(names = "--family", paramLabel = "FAMILY", description = "Only grades of this family, e.g. 'sintered NdFeB'.")
     private String family;
 
-    @Option(names = "--json", description = "Print a JSON array (temperatures in K) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Override
     public Integer call() {
-        List<GradeSummary> grades;
+        List<GradeRow> grades;
         try (Library library = libraryOption.open()) {
-            grades = library.reader().grades(family);
+            grades = Grades.list(library.reader(), family);
         }
         var out = spec.commandLine().getOut();
-        if (json) {
-            List<Map<String, Object>> rows = new ArrayList<>();
-            for (GradeSummary grade : grades) {
-                rows.add(GradeJson.summary(grade));
-            }
-            out.println(Json.write(rows));
+        if (output.json) {
+            out.println(Json.write(grades));
         } else if (grades.isEmpty()) {
             out.println(family == null ? "The library has no grades yet; 'kneepoint import FILE' or 'kneepoint demo' adds some."
                     : "No grades of family '" + family + "'.");
         } else {
             int width = Math.min(40, grades.stream().mapToInt(grade -> grade.name().length()).max().orElse(5));
             out.printf("%-" + width + "s  %-18s  %10s  %s%n", "grade", "family", "price /kg", "curves at");
-            for (GradeSummary grade : grades) {
+            for (GradeRow grade : grades) {
                 out.printf("%-" + width + "s  %-18s  %10s  %s%n", PlainText.printable(grade.name()), PlainText.printable(grade.family()),
                         grade.price() == null ? "-" : String.format(Locale.ROOT, "%.2f", grade.price()), Temperatures.list(grade.temperaturesK()));
             }

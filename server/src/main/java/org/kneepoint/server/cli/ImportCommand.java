@@ -5,10 +5,11 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.importer.csv.ReadLimits;
-import org.kneepoint.server.library.ImportPlan;
-import org.kneepoint.server.library.ImportRun;
+import org.kneepoint.server.app.imports.ImportPlan;
+import org.kneepoint.server.app.imports.ImportRun;
 import org.kneepoint.server.text.ImportView;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.Json;
+import org.kneepoint.server.app.imports.ImportReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -33,8 +34,8 @@ final class ImportCommand implements Callable<Integer> {
     @Option(names = "--dry-run", description = "Read and check everything, report what would be imported, write nothing.")
     private boolean dryRun;
 
-    @Option(names = "--json", description = "Print one JSON document instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Option(names = "--max-file-size", paramLabel = "BYTES", defaultValue = "" + ReadLimits.DEFAULT_MAX_BYTES,
             description = "Refuse files larger than this (default: ${DEFAULT-VALUE} bytes).")
@@ -45,7 +46,7 @@ final class ImportCommand implements Callable<Integer> {
         try (Library library = libraryOption.open()) {
             List<ImportPlan> plans = ImportRun.run(library, SizeLimit.of(maxFileSize), files, dryRun);
             var out = spec.commandLine().getOut();
-            out.print(json ? Json.write(ImportView.json(plans, dryRun)) + System.lineSeparator() : ImportView.table(plans, dryRun));
+            out.print(output.json ? Json.write(ImportReport.of(plans, dryRun)) + System.lineSeparator() : ImportView.table(plans, dryRun));
             out.flush();
         }
         return 0;

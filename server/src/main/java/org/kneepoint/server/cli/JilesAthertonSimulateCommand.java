@@ -8,9 +8,11 @@ import org.kneepoint.fitter.model.ja.JilesAthertonParameters;
 import org.kneepoint.fitter.model.ja.LoopMetrics;
 import org.kneepoint.fitter.model.ja.MajorLoopAnalysis;
 import org.kneepoint.fitter.model.ja.Trajectory;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.Json;
+import org.kneepoint.server.app.fits.JilesAthertonLoopDocument;
 import org.kneepoint.server.text.JilesAthertonLoopView;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -56,8 +58,8 @@ final class JilesAthertonSimulateCommand implements Callable<Integer> {
             description = "Also give the loop +Hmax → −Hmax → +Hmax as N points (3 to " + MAXIMUM_POINTS + ").")
     private Integer points;
 
-    @Option(names = "--json", description = "Print one JSON document (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Override
     public Integer call() {
@@ -69,7 +71,7 @@ final class JilesAthertonSimulateCommand implements Callable<Integer> {
         LoopMetrics metrics = MajorLoopAnalysis.adaptive(parameters).measure(hMax);
         Trajectory loop = points == null ? null : HysteresisSimulator.adaptive(parameters).simulate(loopFields(hMax, points));
         var out = spec.commandLine().getOut();
-        out.print(json ? Json.write(JilesAthertonLoopView.json(parameters, metrics, loop)) + System.lineSeparator()
+        out.print(output.json ? Json.write(JilesAthertonLoopDocument.of(parameters, metrics, loop)) + System.lineSeparator()
                 : JilesAthertonLoopView.table(parameters, metrics, loop));
         out.flush();
         return 0;

@@ -6,12 +6,13 @@ import picocli.CommandLine.Command;
 /** The {@code kneepoint} command: permanent-magnet curves, fits and design checks. */
 @Command(name = "kneepoint",
         mixinStandardHelpOptions = true,
-        versionProvider = VersionInfo.class,
+        versionProvider = VersionProvider.class,
         description = "Demagnetization curves, fits and design checks for permanent magnets.",
         subcommands = {CurveCommand.class, ImportCommand.class, GradesCommand.class, ExportCommand.class,
-            BackupCommand.class, RestoreCommand.class, DemoCommand.class, FitCommand.class, JilesAthertonCommand.class,
-            PermeanceCommand.class, FieldCommand.class, CheckCommand.class, DutyCommand.class, SelectCommand.class,
-            ServeCommand.class, PlotCommand.class, EditCommand.class,
+            BackupCommand.class, RestoreCommand.class, VerifyCommand.class, DemoCommand.class, FitCommand.class, JilesAthertonCommand.class,
+            PermeanceCommand.class, FieldCommand.class, CheckCommand.class, CheckElementsCommand.class, SweepCommand.class,
+            DutyCommand.class, SelectCommand.class,
+            ServeCommand.class, PlotCommand.class, EditCommand.class, SpecCommand.class, LotCommand.class,
             CommandLine.HelpCommand.class})
 public final class KneepointCommand implements Runnable {
 

@@ -1,6 +1,7 @@
 package org.kneepoint.server.cli;
 
 import org.kneepoint.fitter.units.Dimension;
+import org.kneepoint.server.app.InputLimits;
 import picocli.CommandLine;
 import picocli.CommandLine.TypeConversionException;
 
@@ -10,9 +11,9 @@ final class LengthConverter implements CommandLine.ITypeConverter<Double> {
     @Override
     public Double convert(String text) {
         double metres = QuantityConverters.parse(text, Dimension.LENGTH);
-        if (!(metres > 0)) {
-            throw new TypeConversionException("expected a positive length, got '" + text.strip() + "'");
-        }
+        InputLimits.lengthProblem(metres, text).ifPresent(problem -> {
+            throw new TypeConversionException(problem);
+        });
         return metres;
     }
 }

@@ -1,6 +1,6 @@
 package org.kneepoint.server.cli;
 
-import org.kneepoint.server.library.Position;
+import org.kneepoint.server.app.design.Position;
 import picocli.CommandLine;
 import picocli.CommandLine.TypeConversionException;
 

@@ -3,6 +3,7 @@ package org.kneepoint.server.cli;
 import java.util.regex.Pattern;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityParser;
+import org.kneepoint.server.app.InputLimits;
 import picocli.CommandLine;
 import picocli.CommandLine.TypeConversionException;
 
@@ -47,9 +48,9 @@ final class QuantityConverters {
         @Override
         public Double convert(String text) {
             double kelvin = parse(text, Dimension.TEMPERATURE);
-            if (!(kelvin > 0)) {
-                throw new TypeConversionException("expected a temperature above absolute zero, got '" + text.strip() + "'");
-            }
+            InputLimits.temperatureProblem(kelvin, text).ifPresent(problem -> {
+                throw new TypeConversionException(problem);
+            });
             return kelvin;
         }
     }

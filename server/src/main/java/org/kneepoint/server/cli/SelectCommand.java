@@ -1,15 +1,11 @@
 package org.kneepoint.server.cli;
 
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
-import org.kneepoint.fitter.loadline.LoadLine;
-import org.kneepoint.fitter.select.RankingOrder;
-import org.kneepoint.fitter.select.Requirements;
-import org.kneepoint.server.library.LibrarySelection;
-import org.kneepoint.server.library.SelectionRow;
-import org.kneepoint.server.library.SelectionSort;
-import org.kneepoint.server.text.Json;
+import org.kneepoint.server.app.design.DesignChecks;
+import org.kneepoint.server.app.design.SelectionRequest;
+import org.kneepoint.server.app.design.SelectionRun;
+import org.kneepoint.server.app.design.SelectionSort;
 import org.kneepoint.server.text.SelectionView;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -19,7 +15,7 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code kneepoint select (--pc P | SHAPE) --temperature T ...}: every grade of the library against the
- * requirements, ranked, with pass or fail and the reasons (DESIGN §2, workflow 4).
+ * requirements, ranked, with pass or fail and the reasons (docs/design.md §2, workflow 4).
  */
 @Command(name = "select", mixinStandardHelpOptions = true,
         description = "Rank every grade of the library against a load line, temperature, opposing field, minimum flux density"
@@ -36,9 +32,8 @@ final class SelectCommand implements Callable<Integer> {
             description = "Temperature of the magnet, e.g. 120C.")
     private double temperature;
 
-    @Option(names = "--opposing-field", converter = QuantityConverters.FieldStrength.class, defaultValue = "0",
-            description = "External field against the magnetization, e.g. 200kA/m (default: ${DEFAULT-VALUE}).")
-    private double opposingField;
+    @Mixin
+    private FieldOptions field;
 
     @Option(names = "--min-flux-density", converter = QuantityConverters.FluxDensity.class,
             description = "Least flux density B at the operating point, e.g. 1T (default: none).")
@@ -56,25 +51,21 @@ final class SelectCommand implements Callable<Integer> {
             description = "Order within passing and failing grades: flux, margin, loss, temperature or price (default: ${DEFAULT-VALUE}).")
     private String sort;
 
-    @Option(names = "--json", description = "Print a JSON array (SI units) instead of a table.")
-    private boolean json;
+    @Mixin
+    private OutputOptions output;
 
     @Mixin
     private LibraryOption libraryOption;
 
     @Override
     public Integer call() {
-        RankingOrder order = SelectionSort.of(sort);
-        Requirements requirements = new Requirements(new LoadLine(loadLine.pc(), opposingField), temperature, minimumFluxDensity,
-                maximumLossPercent / 100.0);
-        List<SelectionRow> rows;
+        SelectionRequest request = new SelectionRequest(loadLine.spec(), temperature, field.field(), minimumFluxDensity,
+                maximumLossPercent / 100.0, SelectionSort.of(sort), family);
+        SelectionRun run;
         try (Library library = libraryOption.open()) {
-            rows = LibrarySelection.rank(library.reader(), family, requirements, order);
+            run = DesignChecks.select(request, library.reader());
         }
-        var out = spec.commandLine().getOut();
-        out.print(json ? Json.write(SelectionView.json(rows, requirements)) + System.lineSeparator()
-                : SelectionView.table(rows, requirements, loadLine.describe(), SelectionSort.describe(order)));
-        out.flush();
+        output.print(spec.commandLine().getOut(), run::document, () -> SelectionView.table(run));
         return 0;
     }
 }

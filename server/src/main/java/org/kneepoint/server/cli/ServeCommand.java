@@ -4,8 +4,8 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
-import org.kneepoint.server.http.ServerSettings;
-import org.kneepoint.server.library.DemoLoader;
+import org.kneepoint.server.app.serving.ServerSettings;
+import org.kneepoint.server.app.demo.DemoLoader;
 import org.kneepoint.server.web.WebApplication;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -54,17 +54,20 @@ final class ServeCommand implements Callable<Integer> {
                 out.println("Loaded the demo grades (invented data, names start with DEMO).");
             }
             CountDownLatch stopped = new CountDownLatch(1);
-            try (WebApplication application = WebApplication.start(library, settings)) {
-                Runtime.getRuntime().addShutdownHook(new Thread(() -> {
-                    application.close();
-                    stopped.countDown();
-                }, "kneepoint-stop"));
+            WebApplication application = WebApplication.start(library, settings);
+            Runtime.getRuntime().addShutdownHook(new Thread(() -> {
+                application.close();
+                stopped.countDown();
+            }, "kneepoint-stop"));
+            try {
                 String host = settings.bind().contains(":") ? "[" + settings.bind() + "]" : settings.bind();
                 out.println("Kneepoint is serving " + libraryOption.location().describe());
                 out.println("Open http://" + host + ":" + application.port() + "/" + (settings.tokenRequired() ? "  (writes need the token)" : ""));
                 out.println("Stop with Ctrl-C.");
                 out.flush();
                 stopped.await();
+            } finally {
+                application.close();
             }
         }
         return 0;

@@ -2,38 +2,38 @@ package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
 import org.kneepoint.db.Library;
-import org.kneepoint.server.http.DesignRequests.CheckRun;
-import org.kneepoint.server.http.DesignRequests.SelectionRun;
-import org.kneepoint.server.library.Position;
-import org.kneepoint.server.text.CheckView;
-import org.kneepoint.server.text.FieldView;
-import org.kneepoint.server.text.SelectionView;
+import org.kneepoint.server.app.design.GradeModelCache;
+import org.kneepoint.server.app.design.Position;
+import org.kneepoint.server.app.design.FieldDocument;
 
 /**
- * The design routes: {@code /api/check}, {@code /api/duty}, {@code /api/select} and {@code /api/field/{shape}},
- * answering what {@code kneepoint check}, {@code duty}, {@code select} and {@code field} print with {@code --json}.
+ * The design routes: {@code /api/check}, {@code /api/sweep}, {@code /api/duty}, {@code /api/select} and {@code /api/field/{shape}},
+ * answering what {@code kneepoint check}, {@code sweep}, {@code duty}, {@code select} and {@code field} print with {@code --json}.
  */
 final class DesignApi {
 
     private final Library library;
+    private final GradeModelCache models;
 
-    DesignApi(Library library) {
+    DesignApi(Library library, GradeModelCache models) {
         this.library = library;
+        this.models = models;
     }
 
     void check(Context context) {
-        CheckRun run = DesignRequests.check(context, library.reader());
-        LibraryApi.json(context, CheckView.json(run.result(), run.extrapolated()));
+        LibraryApi.json(context, DesignRequests.check(context, library.reader(), models).document());
+    }
+
+    void sweep(Context context) {
+        LibraryApi.json(context, DesignRequests.sweep(context, library.reader(), models).document());
     }
 
     void duty(Context context) {
-        DesignRequests.DutyRun run = DesignRequests.duty(context, library.reader());
-        LibraryApi.json(context, org.kneepoint.server.text.DutyView.json(run.pc(), run.results(), run.extrapolated()));
+        LibraryApi.json(context, DesignRequests.duty(context, library.reader(), models).document());
     }
 
     void select(Context context) {
-        SelectionRun run = DesignRequests.select(context, library.reader());
-        LibraryApi.json(context, SelectionView.json(run.rows(), run.requirements()));
+        LibraryApi.json(context, DesignRequests.select(context, library.reader(), models).document());
     }
 
     void cylinder(Context context) {
@@ -50,6 +50,6 @@ final class DesignApi {
 
     private static void field(Context context, FieldRequest request) {
         Position at = new Query(context).position("at");
-        LibraryApi.json(context, FieldView.json(at.toArray(), request.field().fluxDensity(at.x(), at.y(), at.z())));
+        LibraryApi.json(context, FieldDocument.at(request.field(), at));
     }
 }

@@ -30,18 +30,45 @@ final class DesignParameters {
         all.add(ApiParameter.query("beta", false, "typed-in temperature coefficient of HcJ", "-0.6%/K"));
         all.add(ApiParameter.query("referenceTemperature", false, "temperature the typed-in values refer to (default 20C)", "20C"));
         loadLine(all);
-        all.add(ApiParameter.query("lossLimit", false, "irreversible loss allowed at the maximum working temperature (default 1%)", "1%"));
+        all.add(ApiParameter.query("lossLimit", false, "irreversible loss allowed at the minimum and maximum working temperatures (default 1%)", "1%"));
+        return all.toArray(ApiParameter[]::new);
+    }
+
+    /** The check's parameters and those of its tolerance study. */
+    static ApiParameter[] checkWithTolerances() {
+        List<ApiParameter> all = new ArrayList<>(List.of(check()));
+        all.add(ApiParameter.query("tolerance", false, "a tolerance band NAME=SPEC for a study of the check, repeatable (NAME br, hcj,"
+                + " mu-rec, knee, pc, a size of the shape, temperature, opposing-field or external-field; SPEC ±2%, ±0.05mm, ±5K,"
+                + " -5%..+0%); a band is a 3σ process limit", "br=±2%"));
+        all.add(ApiParameter.query("distribution", false, "normal (default: 3σ = the band, truncated) or uniform", "normal"));
+        all.add(ApiParameter.query("samples", false, "samples of the tolerance study (default 10000)", "10000"));
+        all.add(ApiParameter.query("seed", false, "seed of the study's random numbers (default 14)", "14"));
+        return all.toArray(ApiParameter[]::new);
+    }
+
+    static ApiParameter[] sweep() {
+        List<ApiParameter> all = new ArrayList<>();
+        for (ApiParameter parameter : check()) {
+            if (!parameter.name().equals("temperature")) {
+                all.add(parameter);
+            }
+        }
+        all.add(ApiParameter.query("from", true, "first temperature", "20C"));
+        all.add(ApiParameter.query("to", true, "last temperature (always included)", "180C"));
+        all.add(ApiParameter.query("step", true, "step between temperatures, in kelvin", "5K"));
         return all.toArray(ApiParameter[]::new);
     }
 
     static ApiParameter[] duty() {
         List<ApiParameter> all = new ArrayList<>();
         for (ApiParameter parameter : check()) {
-            if (!parameter.name().equals("temperature") && !parameter.name().equals("opposingField") && !parameter.name().equals("lossLimit")) {
+            if (!parameter.name().equals("temperature") && !parameter.name().equals("opposingField")
+                    && !parameter.name().equals("externalField") && !parameter.name().equals("lossLimit")) {
                 all.add(parameter);
             }
         }
-        all.add(ApiParameter.query("steps", true, "the steps TEMPERATURE:OPPOSING_FIELD separated by commas", "20C:0, 150C:300kA/m, 20C:0"));
+        all.add(ApiParameter.query("steps", true, "the steps TEMPERATURE:FIELD[:external] separated by commas; a field is in the circuit"
+                + " convention unless marked external", "20C:0, 150C:300kA/m, 120C:200kA/m:external"));
         return all.toArray(ApiParameter[]::new);
     }
 
@@ -74,6 +101,9 @@ final class DesignParameters {
         all.add(ApiParameter.query("onSteel", false, "true: one pole face on a large steel plate", "false"));
         all.add(ApiParameter.query("factor", false, "demagnetizing factor: magnetometric (default), fluxmetric or center", "magnetometric"));
         all.add(ApiParameter.query("temperature", true, "temperature of the magnet", "120C"));
-        all.add(ApiParameter.query("opposingField", false, "external field against the magnetization (default 0)", "200kA/m"));
+        all.add(ApiParameter.query("opposingField", false, "field against the magnetization in the circuit convention,"
+                + " B = −μ0·Pc·(H + Ha) (default 0)", "200kA/m"));
+        all.add(ApiParameter.query("externalField", false, "uniform external field against the magnetization on a free magnet,"
+                + " H = −Hext − N·M with N = 1/(1 + Pc); not with opposingField", "300kA/m"));
     }
 }

@@ -2,17 +2,15 @@ package org.kneepoint.server.http;
 
 import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
-import java.util.LinkedHashMap;
-import java.util.Map;
+import io.javalin.http.HttpResponseException;
 import org.kneepoint.fitter.error.ErrorCode;
 import org.kneepoint.fitter.error.KneepointException;
-import org.kneepoint.server.text.Json;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 /**
  * The one place where the HTTP layer turns failures into responses: bad input 400, not found
- * 404, conflict 409, numerical failure 422, the database unreachable 503 (with Retry-After), a
+ * 404, conflict 409, numerical failure 422, the database unreachable 503 (with Retry-After), damaged stored data 500 with code DAMAGED, a
  * refused write 401/403, a body over its limit 413,
  * anything else 500 with a generic message (the details go to the log, never to the client). The
  * body is {@code {"error": {"code": "BAD_INPUT", "message": "..."}}}, or an {@link ErrorPage} when
@@ -31,6 +29,10 @@ final class ErrorMapper {
         config.routes.exception(KneepointException.class, (error, context) -> known(error, context, page));
         config.routes.exception(RequestRefused.class,
                 (error, context) -> respond(context, page, error.status(), error.code(), error.getMessage()));
+        config.routes.exception(HttpResponseException.class, (error, context) -> {
+            ErrorBody body = ErrorBody.of(context.path(), context.header("Accept"), error.getStatus(), page);
+            context.status(error.getStatus()).contentType(body.contentType()).result(body.text());
+        });
         config.routes.exception(Exception.class, (error, context) -> {
             LOG.error("internal error on {} {}", context.method(), context.path(), error);
             respond(context, page, 500, "INTERNAL", "internal error; the server log has the details");
@@ -52,14 +54,7 @@ final class ErrorMapper {
 
     /** Writes the error: an HTML page to a browser asking for a page outside {@code /api}, else the JSON body. */
     private static void respond(Context context, ErrorPage page, int status, String code, String message) {
-        String accept = context.header("Accept");
-        if (!context.path().startsWith("/api/") && accept != null && accept.contains("text/html")) {
-            context.status(status).contentType("text/html; charset=utf-8").result(page.render(status, message));
-            return;
-        }
-        Map<String, Object> body = new LinkedHashMap<>();
-        body.put("code", code);
-        body.put("message", message);
-        context.status(status).contentType("application/json").result(Json.write(Map.of("error", body)));
+        ErrorBody body = ErrorBody.of(context.path(), context.header("Accept"), status, code, message, page);
+        context.status(status).contentType(body.contentType()).result(body.text());
     }
 }

@@ -2,7 +2,7 @@ package org.kneepoint.server.http;
 
 import org.kneepoint.fitter.error.KneepointException;
 
-/** The HTTP status of each kind of known failure: bad input 400, not found 404, conflict 409, numerical failure 422, database unreachable 503. */
+/** The HTTP status of each kind of known failure: bad input 400, not found 404, conflict 409, numerical failure 422, database unreachable 503, damaged stored data 500 (code DAMAGED). */
 public final class ErrorStatus {
 
     private ErrorStatus() {
@@ -16,6 +16,7 @@ public final class ErrorStatus {
             case CONFLICT -> 409;
             case NUMERICAL_FAILURE -> 422;
             case UNAVAILABLE -> 503;
+            case DAMAGED -> 500;
         };
     }
 }

@@ -8,7 +8,7 @@ import org.kneepoint.fitter.shape.CylinderShape;
 import org.kneepoint.fitter.shape.MagnetShape;
 import org.kneepoint.fitter.shape.RingShape;
 import org.kneepoint.fitter.units.Dimension;
-import org.kneepoint.server.library.Lengths;
+import org.kneepoint.server.app.wording.Lengths;
 
 /**
  * A magnet and its field read from a request: the sizes of a cylinder, ring or block and {@code br}, with the

@@ -8,13 +8,13 @@ import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.library.StoredGrade;
-import org.kneepoint.server.library.GradeEdit;
+import org.kneepoint.server.app.grades.GradeEdit;
 
 /**
  * Edits a grade's details from a request, for the API (query parameters) and the grade page's
  * form (form fields) alike: {@code version} (the version the edit was made from) is required, the
  * fields of {@link GradeEdit#FIELDS} that are present change, an empty one is cleared, any other
- * parameter is refused. The page's {@code token} field is the write token, not a detail.
+ * parameter is refused. The page's {@code token} field (the write token) and its form token are not details.
  */
 public final class GradeEditRequests {
 
@@ -44,7 +44,7 @@ public final class GradeEditRequests {
             String value = parameter.getValue().get(0);
             switch (name) {
                 case "version" -> version = value;
-                case "token" -> { }
+                case "token", FormTokens.FIELD -> { }
                 default -> changes.put(name, value);
             }
         }

@@ -1,13 +1,16 @@
 package org.kneepoint.server.http;
 
+import org.kneepoint.server.app.jobs.JobProgress;
+import org.kneepoint.server.app.jobs.JobWork;
+import org.kneepoint.server.app.serving.ServerSettings;
+
 import java.util.List;
-import java.util.Map;
 import java.util.function.Consumer;
 import org.kneepoint.db.Library;
 import org.kneepoint.importer.csv.ReadLimits;
-import org.kneepoint.server.library.ImportRun;
-import org.kneepoint.server.library.ImportStep;
-import org.kneepoint.server.text.ImportView;
+import org.kneepoint.server.app.imports.ImportReport;
+import org.kneepoint.server.app.imports.ImportRun;
+import org.kneepoint.server.app.imports.ImportStep;
 
 /**
  * An import of uploaded files as a background job: the same run as {@code POST /api/import}, one
@@ -26,9 +29,9 @@ public final class ImportJob implements JobWork {
     }
 
     @Override
-    public Map<String, Object> run(Consumer<JobProgress> progress) {
+    public ImportReport run(Consumer<JobProgress> progress) {
         try (uploads) {
-            return ImportView.json(ImportRun.run(library, new ReadLimits(ServerSettings.MAX_UPLOAD_BYTES), uploads.files(), false,
+            return ImportReport.of(ImportRun.run(library, new ReadLimits(ServerSettings.MAX_UPLOAD_BYTES), uploads.files(), false,
                     step -> progress.accept(progressOf(step))), false);
         }
     }

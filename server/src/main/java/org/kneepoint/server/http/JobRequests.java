@@ -1,5 +1,9 @@
 package org.kneepoint.server.http;
 
+import org.kneepoint.server.app.jobs.JobKind;
+import org.kneepoint.server.app.jobs.JobProgress;
+import org.kneepoint.server.app.jobs.JobRegistry;
+
 import io.javalin.http.Context;
 import java.util.List;
 import java.util.Locale;
@@ -7,8 +11,9 @@ import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.fitter.model.ja.FitStage;
 import org.kneepoint.fitter.units.Dimension;
-import org.kneepoint.server.library.JilesAthertonFitData;
-import org.kneepoint.server.library.JilesAthertonFitRun;
+import org.kneepoint.server.app.fits.JilesAthertonFitData;
+import org.kneepoint.server.app.fits.JilesAthertonFitDocument;
+import org.kneepoint.server.app.fits.JilesAthertonFitRun;
 
 /**
  * Starts jobs from a request, for the API and the pages alike. What can be checked up front (the
@@ -30,7 +35,7 @@ public final class JobRequests {
             throw new NotFoundException("no grade named '" + grade + "' in the library");
         }
         JilesAthertonFitData data = JilesAthertonFitData.fromGrade(library.reader(), grade, temperatureK, magnetizingField);
-        return jobs.submit(JobKind.JA_FIT, progress -> JilesAthertonFitRun.json(data, JilesAthertonFitRun.fit(data, (fraction, stage) ->
+        return jobs.submit(JobKind.JA_FIT, progress -> JilesAthertonFitDocument.of(data, JilesAthertonFitRun.fit(data, (fraction, stage) ->
                 progress.accept(new JobProgress(Math.min(Math.max(fraction, 0), 1), words(stage), List.of()))), false)).orElseThrow(JobRequests::busy);
     }
 

@@ -1,15 +1,12 @@
 package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
-import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.shape.BlockShape;
 import org.kneepoint.fitter.shape.CylinderShape;
-import org.kneepoint.fitter.shape.FlatPoleShape;
-import org.kneepoint.fitter.shape.MagnetOnSteelPlate;
 import org.kneepoint.fitter.shape.MagnetShape;
 import org.kneepoint.fitter.shape.RingShape;
 import org.kneepoint.fitter.shape.SpheroidShape;
-import org.kneepoint.server.text.PermeanceView;
+import org.kneepoint.server.app.design.PermeanceDocument;
 
 /**
  * {@code GET /api/permeance/{shape}}: demagnetizing factors Nm, Nf, N0 and the permeance
@@ -41,13 +38,6 @@ final class PermeanceApi {
     }
 
     private static void answer(Context context, Query query, MagnetShape shape) {
-        MagnetShape seen = shape;
-        if (query.flag("onSteel")) {
-            if (!(shape instanceof FlatPoleShape flat)) {
-                throw new BadInputException("onSteel needs a magnet with a flat pole face (cylinder, ring or block)");
-            }
-            seen = new MagnetOnSteelPlate(flat);
-        }
-        LibraryApi.json(context, PermeanceView.json(seen.demagnetizingFactors()));
+        LibraryApi.json(context, PermeanceDocument.of(PermeanceDocument.seen(shape, query.flag("onSteel"), "onSteel").demagnetizingFactors()));
     }
 }

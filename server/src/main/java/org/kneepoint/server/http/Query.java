@@ -7,7 +7,8 @@ import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityParser;
-import org.kneepoint.server.library.Position;
+import org.kneepoint.server.app.InputLimits;
+import org.kneepoint.server.app.design.Position;
 
 /**
  * Reads query parameters of a request into SI values. A missing required parameter, a value of
@@ -41,9 +42,9 @@ final class Query {
     double temperatureK(String name) {
         String text = required(name, "120C");
         double kelvin = quantity(name, text, Dimension.TEMPERATURE);
-        if (!(kelvin > 0) || kelvin > 5000) {
-            throw bad(name, "expected a temperature above absolute zero and below 5000 K, got '" + text + "'");
-        }
+        InputLimits.temperatureProblem(kelvin, text).ifPresent(problem -> {
+            throw bad(name, problem);
+        });
         return kelvin;
     }
 
@@ -51,9 +52,9 @@ final class Query {
     double length(String name) {
         String text = required(name, "10mm");
         double metres = quantity(name, text, Dimension.LENGTH);
-        if (!(metres > 0) || metres > 100) {
-            throw bad(name, "expected a positive length up to 100 m, got '" + text + "'");
-        }
+        InputLimits.lengthProblem(metres, text).ifPresent(problem -> {
+            throw bad(name, problem);
+        });
         return metres;
     }
 

@@ -1,5 +1,7 @@
 package org.kneepoint.server.http;
 
+import org.kneepoint.server.app.serving.ServerSettings;
+
 import io.javalin.http.Context;
 import io.javalin.http.UploadedFile;
 import java.io.IOException;

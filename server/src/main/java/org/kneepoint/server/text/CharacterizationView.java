@@ -1,19 +1,12 @@
 package org.kneepoint.server.text;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
-import org.kneepoint.fitter.curve.Characterization;
-import org.kneepoint.fitter.curve.DemagnetizationCurve;
-import org.kneepoint.server.library.GradeCurve;
+import org.kneepoint.server.app.grades.CurveDocument;
 import org.kneepoint.fitter.units.Dimension;
 import org.kneepoint.fitter.units.QuantityFormatter;
 import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
 
-/**
- * A curve's characterization as JSON (the keys {@code br, hcb, hcj, bhMax, hAtBhMax, bAtBhMax, hk,
- * squareness, muRec, temperatureK} in SI, plus where μrec came from) and as a readable table.
- */
+/** A curve's characterization ({@link CurveDocument}) as a readable table. */
 public final class CharacterizationView {
 
     private static final Unit TESLA = UnitCatalog.require("T", Dimension.FLUX_DENSITY);
@@ -25,42 +18,14 @@ public final class CharacterizationView {
     private CharacterizationView() {
     }
 
-    /** The JSON object of one characterization, keys in a fixed order. */
-    public static Map<String, Object> json(GradeCurve gradeCurve, Characterization c) {
-        DemagnetizationCurve curve = gradeCurve.curve();
-        Map<String, Object> json = new LinkedHashMap<>();
-        json.put("source", gradeCurve.grade());
-        json.put("modeled", gradeCurve.modeled());
-        json.put("extrapolated", gradeCurve.extrapolated());
-        json.put("kind", curve.kind().name().toLowerCase());
-        json.put("points", curve.size());
-        json.put("temperatureK", c.temperatureK());
-        json.put("br", c.br());
-        json.put("hcb", c.hcb());
-        json.put("hcj", c.hcj());
-        json.put("bhMax", c.bhMax());
-        json.put("hAtBhMax", c.hAtBhMax());
-        json.put("bAtBhMax", c.bAtBhMax());
-        json.put("hk", c.hk());
-        json.put("squareness", c.squareness());
-        json.put("muRec", c.muRec());
-        Map<String, Object> window = new LinkedHashMap<>();
-        window.put("from", c.recoilWindow().from());
-        window.put("to", c.recoilWindow().to());
-        window.put("points", c.recoilWindow().points());
-        json.put("recoilWindow", window);
-        return json;
-    }
-
     /** A readable table of one characterization. */
-    public static String table(GradeCurve gradeCurve, Characterization c) {
-        DemagnetizationCurve curve = gradeCurve.curve();
+    public static String table(CurveDocument c) {
         StringBuilder out = new StringBuilder();
-        out.append(PlainText.printable(gradeCurve.grade())).append(": ")
-                .append(gradeCurve.modeled() ? "modeled " : "").append(curve.kind().name().toLowerCase()).append(" curve, ")
-                .append(curve.size()).append(" points, ")
+        out.append(PlainText.printable(c.source())).append(": ")
+                .append(c.modeled() ? "modeled " : "").append(c.kind()).append(" curve, ")
+                .append(c.points()).append(" points, ")
                 .append(c.temperatureK() == null ? "temperature not given" : QuantityFormatter.format(c.temperatureK(), CELSIUS, 5))
-                .append(gradeCurve.extrapolated() ? " (EXTRAPOLATED beyond the measured temperatures)" : "")
+                .append(c.extrapolated() ? " (EXTRAPOLATED beyond the measured temperatures)" : "")
                 .append('\n');
         row(out, "Br", QuantityFormatter.format(c.br(), TESLA, 4));
         row(out, "HcB", field(c.hcb()));

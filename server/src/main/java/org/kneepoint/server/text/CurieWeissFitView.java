@@ -1,49 +1,14 @@
 package org.kneepoint.server.text;
 
-import java.util.LinkedHashMap;
 import java.util.Locale;
-import java.util.Map;
 import org.kneepoint.fitter.model.curieweiss.CurieWeissFit;
 import org.kneepoint.fitter.model.curieweiss.CurieWeissParameters;
 import org.kneepoint.fitter.units.QuantityFormatter;
 
-/**
- * A Curie–Weiss fit as JSON (keys {@code curieConstant} in K, {@code weissTemperatureK},
- * {@code chi0} in SI volume susceptibility, {@code behaviour}, then standard errors, correlation
- * in the order C, θ, χ0, residual and data range; null where the data do not determine a value)
- * and as a readable table.
- */
+/** A Curie–Weiss fit as a readable table; its JSON document is {@code app.fits.CurieWeissFitDocument}. */
 public final class CurieWeissFitView {
 
     private CurieWeissFitView() {
-    }
-
-    /** The three parameters as a JSON object, SI. */
-    public static Map<String, Object> parameters(CurieWeissParameters p) {
-        Map<String, Object> json = new LinkedHashMap<>();
-        json.put("curieConstant", p.curieConstant());
-        json.put("weissTemperatureK", p.weissTemperature());
-        json.put("chi0", p.temperatureIndependentSusceptibility());
-        return json;
-    }
-
-    /** The fit's keys, to be followed by the caller's provenance keys. */
-    public static Map<String, Object> json(CurieWeissFit fit) {
-        Map<String, Object> json = parameters(fit.parameters());
-        json.put("behaviour", behaviour(fit));
-        json.put("curieWeissSignificant", fit.curieWeissSignificant());
-        Map<String, Object> errors = new LinkedHashMap<>();
-        errors.put("curieConstant", JsonNumbers.finite(fit.curieConstantError()));
-        errors.put("weissTemperatureK", JsonNumbers.finite(fit.weissTemperatureError()));
-        errors.put("chi0", JsonNumbers.finite(fit.temperatureIndependentError()));
-        json.put("standardErrors", errors);
-        json.put("correlation", JsonNumbers.matrix(fit.correlation()));
-        json.put("rmsResidual", fit.rmsResidual());
-        json.put("points", fit.points());
-        json.put("temperatureMinK", fit.temperatureMin());
-        json.put("temperatureMaxK", fit.temperatureMax());
-        json.put("evaluations", fit.evaluations());
-        return json;
     }
 
     /** A readable table, headed by {@code title}. */

@@ -1,7 +1,5 @@
 package org.kneepoint.server.text;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.kneepoint.fitter.model.ja.JilesAthertonFit;
 import org.kneepoint.fitter.model.ja.JilesAthertonParameters;
 import org.kneepoint.fitter.model.ja.JilesAthertonStandardErrors;
@@ -10,12 +8,7 @@ import org.kneepoint.fitter.units.QuantityFormatter;
 import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
 
-/**
- * A Jiles–Atherton fit as JSON (keys {@code ms, a, k, c, alpha, rmsB, evaluations}, then
- * {@code standardErrors}, {@code correlation} in the order Ms, a, k, c, α, {@code iterations},
- * {@code points}, {@code fieldMin}, {@code fieldMax}; null for an error the data do not bound) and
- * as a readable table. The caller adds where the data came from.
- */
+/** A Jiles–Atherton fit as a readable table; its JSON document is {@code app.fits.JilesAthertonFitDocument}. */
 public final class JilesAthertonFitView {
 
     private static final Unit KILO_AMPERE = UnitCatalog.require("kA/m", Dimension.FIELD_STRENGTH);
@@ -24,38 +17,6 @@ public final class JilesAthertonFitView {
     private static final String[] NAMES = {"Ms", "a", "k", "c", "α"};
 
     private JilesAthertonFitView() {
-    }
-
-    /** The five parameters as a JSON object, SI. */
-    public static Map<String, Object> parameters(JilesAthertonParameters p) {
-        Map<String, Object> json = new LinkedHashMap<>();
-        json.put("ms", p.ms());
-        json.put("a", p.a());
-        json.put("k", p.k());
-        json.put("c", p.c());
-        json.put("alpha", p.alpha());
-        return json;
-    }
-
-    /** The fit's keys, to be followed by the caller's provenance keys. */
-    public static Map<String, Object> json(JilesAthertonFit fit) {
-        Map<String, Object> json = parameters(fit.parameters());
-        json.put("rmsB", fit.rmsB());
-        json.put("evaluations", fit.evaluations());
-        JilesAthertonStandardErrors e = fit.standardErrors();
-        Map<String, Object> errors = new LinkedHashMap<>();
-        errors.put("ms", JsonNumbers.finite(e.ms()));
-        errors.put("a", JsonNumbers.finite(e.a()));
-        errors.put("k", JsonNumbers.finite(e.k()));
-        errors.put("c", JsonNumbers.finite(e.c()));
-        errors.put("alpha", JsonNumbers.finite(e.alpha()));
-        json.put("standardErrors", errors);
-        json.put("correlation", JsonNumbers.matrix(fit.correlation()));
-        json.put("iterations", fit.iterations());
-        json.put("points", fit.lastPoint() - fit.firstPoint() + 1);
-        json.put("fieldMin", fit.fieldMin());
-        json.put("fieldMax", fit.fieldMax());
-        return json;
     }
 
     /** A readable table, headed by {@code title}. */

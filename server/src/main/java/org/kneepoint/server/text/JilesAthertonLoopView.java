@@ -1,9 +1,5 @@
 package org.kneepoint.server.text;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
-import java.util.List;
-import java.util.Map;
 import org.kneepoint.fitter.model.ja.JilesAthertonParameters;
 import org.kneepoint.fitter.model.ja.LoopMetrics;
 import org.kneepoint.fitter.model.ja.Trajectory;
@@ -12,11 +8,7 @@ import org.kneepoint.fitter.units.QuantityFormatter;
 import org.kneepoint.fitter.units.Unit;
 import org.kneepoint.fitter.units.UnitCatalog;
 
-/**
- * A simulated Jiles–Atherton major loop as JSON (keys {@code hc, mr, br, hcj, hcb, mMax, bMax,
- * lossPerCycle} in SI, the parameters and Hmax, and {@code points} as [H, B] pairs when asked
- * for) and as a readable table.
- */
+/** A simulated Jiles–Atherton major loop as a readable table; its JSON document is {@code app.fits.JilesAthertonLoopDocument}. */
 public final class JilesAthertonLoopView {
 
     private static final Unit TESLA = UnitCatalog.require("T", Dimension.FLUX_DENSITY);
@@ -25,31 +17,6 @@ public final class JilesAthertonLoopView {
     private static final Unit ENERGY = UnitCatalog.require("J/m³", Dimension.ENERGY_PRODUCT);
 
     private JilesAthertonLoopView() {
-    }
-
-    /** The JSON object; {@code loop} may be null (no points asked for). */
-    public static Map<String, Object> json(JilesAthertonParameters p, LoopMetrics m, Trajectory loop) {
-        Map<String, Object> json = new LinkedHashMap<>();
-        json.put("hc", m.hc());
-        json.put("mr", m.mr());
-        json.put("br", m.br());
-        json.put("hcj", m.hcj());
-        json.put("hcb", m.hcb());
-        json.put("mMax", m.mMax());
-        json.put("bMax", m.bMax());
-        json.put("lossPerCycle", m.lossPerCycle());
-        json.put("hMax", m.hMax());
-        json.put("parameters", JilesAthertonFitView.parameters(p));
-        if (loop != null) {
-            double[] h = loop.field();
-            double[] b = loop.fluxDensity();
-            List<double[]> points = new ArrayList<>();
-            for (int i = 0; i < h.length; i++) {
-                points.add(new double[] {h[i], b[i]});
-            }
-            json.put("points", points);
-        }
-        return json;
     }
 
     /** A readable table; with a loop, a one-line summary of its points. */

@@ -1,36 +1,13 @@
 package org.kneepoint.server.text;
 
-import java.util.LinkedHashMap;
-import java.util.Map;
 import org.kneepoint.fitter.shape.DemagnetizingFactors;
 import org.kneepoint.fitter.shape.PermeanceCoefficients;
 import org.kneepoint.fitter.units.QuantityFormatter;
 
-/**
- * Demagnetizing factors and permeance coefficients as JSON ({@code demagnetizingFactor} and
- * {@code permeanceCoefficient}, each with {@code magnetometric}, {@code fluxmetric}, {@code center})
- * and as a table.
- */
+/** Demagnetizing factors and permeance coefficients as a table; their JSON document is {@code app.design.PermeanceDocument}. */
 public final class PermeanceView {
 
     private PermeanceView() {
-    }
-
-    /** The JSON object of one set of factors, keys in a fixed order. */
-    public static Map<String, Object> json(DemagnetizingFactors factors) {
-        PermeanceCoefficients pc = factors.permeanceCoefficients();
-        Map<String, Object> json = new LinkedHashMap<>();
-        json.put("demagnetizingFactor", triple(factors.magnetometric(), factors.fluxmetric(), factors.centrePoint()));
-        json.put("permeanceCoefficient", triple(pc.magnetometric(), pc.fluxmetric(), pc.centrePoint()));
-        return json;
-    }
-
-    private static Map<String, Double> triple(double magnetometric, double fluxmetric, double center) {
-        Map<String, Double> values = new LinkedHashMap<>();
-        values.put("magnetometric", magnetometric);
-        values.put("fluxmetric", fluxmetric);
-        values.put("center", center);
-        return values;
     }
 
     /** A readable table of one set of factors under a one-line description of the magnet. */

@@ -1,66 +1,37 @@
 package org.kneepoint.server.text;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import org.kneepoint.server.app.wording.EngineeringUnits;
+import org.kneepoint.server.app.wording.Cautions;
 import java.util.List;
-import java.util.Map;
 import org.kneepoint.fitter.select.RankedGrade;
 import org.kneepoint.fitter.select.Requirements;
-import org.kneepoint.server.library.SelectionRow;
+import org.kneepoint.server.app.design.SelectionDocument;
+import org.kneepoint.server.app.design.SelectionRow;
+import org.kneepoint.server.app.design.SelectionRun;
+import org.kneepoint.server.app.design.SelectionSort;
 
 /**
- * A grade selection as JSON (an array of rows {@code grade, family, assessable, pass, reasons, fluxDensity,
- * kneeMarginH, irreversibleLossPercent, maxWorkingTemperatureK, extrapolated}, SI, null where a grade gives
- * no value) and as a table that ends with the cautions.
+ * A grade selection as a table that ends with the cautions (its JSON document is one
+ * {@link SelectionDocument} per grade).
  */
 public final class SelectionView {
 
     private SelectionView() {
     }
 
-    /** The JSON array, in ranked order. */
-    public static List<Map<String, Object>> json(List<SelectionRow> rows, Requirements requirements) {
-        List<Map<String, Object>> json = new ArrayList<>();
-        for (SelectionRow row : rows) {
-            RankedGrade ranked = row.ranked();
-            Map<String, Object> entry = new LinkedHashMap<>();
-            entry.put("grade", row.grade());
-            entry.put("family", row.family());
-            entry.put("assessable", row.assessable());
-            entry.put("pass", row.passes());
-            entry.put("reasons", reasons(row, requirements));
-            entry.put("fluxDensity", ranked == null ? null : JsonNumbers.finite(ranked.fluxDensity()));
-            entry.put("kneeMarginH", ranked == null ? null : JsonNumbers.finite(ranked.kneeMarginField()));
-            entry.put("irreversibleLossPercent", ranked == null ? null : JsonNumbers.finite(100.0 * ranked.irreversibleLoss()));
-            entry.put("maxWorkingTemperatureK", ranked == null ? null : ranked.maxWorkingTemperature());
-            entry.put("extrapolated", row.extrapolated());
-            entry.put("price", ranked == null ? null : ranked.price());
-            json.add(entry);
-        }
-        return json;
-    }
-
-    /** Why a grade fails or cannot be assessed, one sentence each; empty when it passes. */
-    public static List<String> reasons(SelectionRow row, Requirements requirements) {
-        if (!row.assessable()) {
-            return List.of("not assessable: " + row.notAssessable());
-        }
-        RankedGrade ranked = row.ranked();
-        return ranked.shortfalls().stream().map(shortfall -> switch (shortfall.requirement()) {
-            case MINIMUM_FLUX_DENSITY -> "flux density " + EngineeringUnits.tesla(ranked.fluxDensity()) + " is below the minimum "
-                    + EngineeringUnits.tesla(requirements.minimumFluxDensity());
-            case MAXIMUM_IRREVERSIBLE_LOSS -> "irreversible loss " + EngineeringUnits.percent(ranked.irreversibleLoss())
-                    + " exceeds the maximum " + EngineeringUnits.percent(requirements.maximumIrreversibleLoss());
-            case TEMPERATURE_RANGE -> EngineeringUnits.celsius(requirements.temperature()) + " lies "
-                    + EngineeringUnits.number(shortfall.by()) + " K outside the range of the grade's temperature model";
-        }).toList();
-    }
-
     /** The readable table: a heading with the requirements, one row per grade, the sort key, the cautions. */
-    public static String table(List<SelectionRow> rows, Requirements requirements, String loadLine, String sortedBy) {
+    public static String table(SelectionRun run) {
+        List<SelectionRow> rows = run.rows();
+        Requirements requirements = run.requirements();
+        String loadLine = run.loadLine().describe();
+        String sortedBy = SelectionSort.describe(run.order());
         StringBuilder out = new StringBuilder("Grade selection at ").append(EngineeringUnits.celsius(requirements.temperature()))
                 .append(", ").append(loadLine).append(", Pc = ").append(EngineeringUnits.number(requirements.loadLine().pc()))
-                .append(", opposing field ").append(EngineeringUnits.field(requirements.loadLine().opposingField())).append('\n');
+                .append(requirements.field().convention() == org.kneepoint.fitter.loadline.FieldConvention.EXTERNAL
+                        ? ", external field on a free magnet " + EngineeringUnits.field(requirements.field().field()) + " (load line Ha = "
+                                + EngineeringUnits.field(requirements.loadLine().opposingField()) + ")"
+                        : ", opposing field (circuit convention) " + EngineeringUnits.field(requirements.loadLine().opposingField()))
+                .append('\n');
         out.append("  requires: B at least ").append(requirements.minimumFluxDensity() == null ? "(any)"
                 : EngineeringUnits.tesla(requirements.minimumFluxDensity())).append(", irreversible loss at most ")
                 .append(EngineeringUnits.percent(requirements.maximumIrreversibleLoss())).append('\n');
@@ -82,11 +53,17 @@ public final class SelectionView {
                     ranked == null || !Double.isFinite(ranked.fluxDensity()) ? "-" : ranked.maxWorkingTemperature() == null ? "none"
                             : EngineeringUnits.celsius(ranked.maxWorkingTemperature()),
                     ranked == null || ranked.price() == null ? "-" : String.format(java.util.Locale.ROOT, "%.2f", ranked.price()),
-                    row.extrapolated() ? "yes" : "no", PlainText.printable(String.join("; ", reasons(row, requirements)))));
+                    row.extrapolated() ? "yes" : "no", PlainText.printable(String.join("; ", SelectionDocument.reasons(row, requirements)))));
         }
         out.append("  Passing grades first, each group sorted by ").append(sortedBy)
                 .append("; \"extr.\" marks a temperature model used outside its measured temperatures.\n");
-        return out.append(Cautions.table(anyExtrapolated)).toString();
+        List<String> beyond = rows.stream().filter(row -> row.assessable() && row.ranked().beyondMeasuredField())
+                .map(row -> PlainText.printable(row.grade())).toList();
+        if (!beyond.isEmpty()) {
+            out.append("  Beyond the measured field (the fitted knee model stands in for the data at the operating point): ")
+                    .append(String.join(", ", beyond)).append(".\n");
+        }
+        return out.append(Cautions.table(anyExtrapolated, !beyond.isEmpty())).toString();
     }
 
     private static String value(double number, String text) {

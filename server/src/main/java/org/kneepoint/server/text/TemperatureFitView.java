@@ -1,47 +1,15 @@
 package org.kneepoint.server.text;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
-import java.util.List;
-import java.util.Map;
+import org.kneepoint.server.app.wording.Temperatures;
+
 import org.kneepoint.fitter.model.knee.KneeFit;
 import org.kneepoint.fitter.model.knee.TemperatureFit;
 import org.kneepoint.fitter.units.QuantityFormatter;
 
-/** A temperature model as JSON (coefficients in %/K and %/K², SI elsewhere) and as a table. */
+/** A temperature model as a readable table; its JSON document is {@code app.fits.TemperatureFitDocument}. */
 public final class TemperatureFitView {
 
     private TemperatureFitView() {
-    }
-
-    /** What a saved temperature fit stores: the coefficients and the fitted parameters per temperature. */
-    public static Map<String, Object> parameters(TemperatureFit fit) {
-        Map<String, Object> json = new LinkedHashMap<>();
-        json.put("referenceTemperatureK", fit.referenceTemperatureK());
-        json.put("alphaPercentPerK", 100 * fit.alpha());
-        json.put("betaPercentPerK", 100 * fit.beta());
-        json.put("alpha2PercentPerK2", finiteOrNull(100 * fit.alpha2()));
-        json.put("beta2PercentPerK2", finiteOrNull(100 * fit.beta2()));
-        json.put("muRecSlopePerK", fit.muRecSlope());
-        json.put("relativeKneeWidthSlopePerK", fit.relativeWidthSlope());
-        List<Map<String, Object>> fits = new ArrayList<>();
-        for (KneeFit knee : fit.fits()) {
-            Map<String, Object> row = new LinkedHashMap<>(KneeFitView.parameters(knee));
-            row.put("temperatureK", knee.temperatureK());
-            row.put("hk", knee.hk());
-            row.put("rmsJ", knee.rmsJ());
-            fits.add(row);
-        }
-        json.put("fits", fits);
-        return json;
-    }
-
-    public static Map<String, Object> json(TemperatureFit fit) {
-        Map<String, Object> json = parameters(fit);
-        List<KneeFit> fits = fit.fits();
-        json.put("measuredRangeK", new double[] {fits.get(0).temperatureK(), fits.get(fits.size() - 1).temperatureK()});
-        json.put("modelRangeK", new double[] {fit.model().lowestTemperature(), fit.model().highestTemperature()});
-        return json;
     }
 
     public static String table(String source, TemperatureFit fit) {
@@ -62,7 +30,4 @@ public final class TemperatureFitView {
         return out.toString();
     }
 
-    private static Double finiteOrNull(double value) {
-        return Double.isFinite(value) ? value : null;
-    }
 }

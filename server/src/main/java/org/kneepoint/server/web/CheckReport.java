@@ -8,8 +8,8 @@ import java.time.Instant;
 import java.util.List;
 import org.kneepoint.fitter.loadline.LoadLine;
 import org.kneepoint.server.chart.CheckChart;
-import org.kneepoint.server.http.DesignRequests.CheckRun;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.app.design.CheckRun;
+import org.kneepoint.server.app.wording.Temperatures;
 
 /**
  * A design check as one self-contained HTML file for a design review: the inputs, the results, the
@@ -41,32 +41,20 @@ public final class CheckReport {
     private CheckReport() {
     }
 
+    /** The report's contents; {@code chart} is SVG markup from the chart library and {@code styleSheet} our own CSS. */
+    record View(String version, String madeAt, String inputs, String model, String loadLine, String temperature,
+            List<CheckResults.Row> results, String chart, List<String> assumptions, List<String> sources, boolean extrapolated,
+            String styleSheet) {
+    }
+
+    /** The report of a check, from the command line that asked for it, by this version of the program. */
     public static String html(CheckRun run, String inputs, String programVersion) {
         String temperature = Temperatures.celsius(run.result().temperature());
         LoadLine line = run.result().loadLine();
         String chart = CheckChart.svg("Operating point at " + temperature, run.model().model(), CheckChart.temperaturesOf(
                 run.model().model(), run.result().temperature(), run.result().maxWorkingTemperature()), line, 960, 560);
-        StringBuilder out = new StringBuilder("<!DOCTYPE html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>Design check report</title><style>")
-                .append(styleSheet()).append("</style></head><body><main>")
-                .append("<h1>Design check report</h1><p>Made by Kneepoint ").append(Html.text(programVersion)).append(" at ")
-                .append(Html.text(Instant.now().toString())).append(".</p>")
-                .append("<h2>Inputs</h2><p>").append(Html.text(inputs)).append("</p><p>").append(Html.text(run.model().description()))
-                .append("; ").append(Html.text(run.loadLine().describe())).append(".</p>")
-                .append("<h2>Results at ").append(Html.text(temperature)).append("</h2>").append(CheckPage.resultsTable(run))
-                .append("<figure class=\"chart\">").append(chart).append("<figcaption>B (solid) and J (dashed) of the grade at ")
-                .append(Html.text(temperature)).append(", the load line and a ring at the operating point.</figcaption></figure>")
-                .append(list("Assumptions", ASSUMPTIONS)).append(list("Methods and their sources", SOURCES))
-                .append(Layout.cautions(run.extrapolated()))
-                .append("</main></body></html>\n");
-        return out.toString();
-    }
-
-    private static String list(String heading, List<String> items) {
-        StringBuilder out = new StringBuilder("<h2>").append(Html.text(heading)).append("</h2><ul>");
-        for (String item : items) {
-            out.append("<li>").append(Html.text(item)).append("</li>");
-        }
-        return out.append("</ul>").toString();
+        return Templates.render("report.jte", new View(programVersion, Instant.now().toString(), inputs, run.model().description(),
+                run.loadLine().describe(), temperature, CheckResults.rows(run), chart, ASSUMPTIONS, SOURCES, run.extrapolated(), styleSheet()));
     }
 
     private static String styleSheet() {

@@ -5,9 +5,9 @@ import java.util.function.UnaryOperator;
 import org.kneepoint.server.http.FieldRequest;
 
 /**
- * The Field page ({@code /field}): a form — a cylinder, ring or block, its sizes and Br — and, once sent, the map of
- * |B| with field lines over the plane through the magnet's axis. The form sends the parameters of
- * {@code GET /api/field/{shape}} (without the point) and {@code shape}.
+ * The Field page ({@code /field}, template {@code field.jte}): a form — a cylinder, ring or block, its sizes and
+ * Br — and, once sent, the map of |B| with field lines over the plane through the magnet's axis. The form sends the
+ * parameters of {@code GET /api/field/{shape}} (without the point) and {@code shape}.
  */
 final class FieldPage {
 
@@ -19,32 +19,25 @@ final class FieldPage {
     private FieldPage() {
     }
 
-    static String render(UnaryOperator<String> values, String query, FieldRequest request, String problem, boolean demoPresent) {
-        StringBuilder out = new StringBuilder("<h1>Field of a magnet</h1>").append(FormFields.problem(problem))
-                .append("<form class=\"design\" method=\"get\" action=\"/field\">")
-                .append("<fieldset><legend>Magnet, magnetized along its length or thickness</legend><div class=\"fields\">")
-                .append(FormFields.choice(values, "shape", "shape", List.of(new String[] {"cylinder", "cylinder"},
-                        new String[] {"ring", "ring"}, new String[] {"block", "block"})))
-                .append(FormFields.text(values, "br", "Br", "1.3T")).append("</div>")
-                .append("<div class=\"fields\"><span class=\"group\">Cylinder or ring</span>")
-                .append(FormFields.text(values, "diameter", "diameter", "10mm")).append(FormFields.text(values, "length", "length", "5mm"))
-                .append(FormFields.text(values, "innerDiameter", "bore (ring)", "4mm")).append("</div>")
-                .append("<div class=\"fields\"><span class=\"group\">Block</span>")
-                .append(FormFields.text(values, "width", "width (along x)", "20mm")).append(FormFields.text(values, "depth", "depth", "10mm"))
-                .append(FormFields.text(values, "thickness", "thickness (along M)", "5mm"))
-                .append("</div></fieldset><button type=\"submit\" class=\"primary\">Draw the field</button></form>");
-        if (request != null) {
-            out.append(result(request, query));
-        }
-        return Layout.page("Field", "Field", out.toString(), demoPresent);
+    /** What the page shows: the problem of the request (or null), the form's fields, and the magnet drawn once sent (or null). */
+    record View(Layout.Frame frame, String problem, FormFields.Choice shape, FormFields.TextField br, List<FormFields.TextField> cylinder,
+            List<FormFields.TextField> block, Result result) {
     }
 
-    private static String result(FieldRequest request, String query) {
-        return "<h2>Field of a " + Html.text(request.describe()) + "</h2>"
-                + "<figure class=\"chart\"><img src=\"/charts/field.svg?" + Html.text(query) + "\" width=\"" + CHART_WIDTH
-                + "\" height=\"" + CHART_HEIGHT + "\" alt=\"Map of the flux density with field lines\"><figcaption>"
-                + "|B| in tesla over the plane through the magnet's axis (x across, z along the magnetization), field lines "
-                + "from the north face and into the south face, and the magnet's section. Uniform magnetization, no "
-                + "steel nearby.</figcaption></figure>";
+    /** The magnet in words and the link of its chart, with the chart's size in pixels. */
+    record Result(String magnet, String chart, int width, int height) {
+    }
+
+    static String render(UnaryOperator<String> values, String query, FieldRequest request, String problem, boolean demoPresent) {
+        FormFields.Choice shape = FormFields.choice(values, "shape", "shape", List.of(new String[] {"cylinder", "cylinder"},
+                new String[] {"ring", "ring"}, new String[] {"block", "block"}));
+        List<FormFields.TextField> cylinder = List.of(FormFields.text(values, "diameter", "diameter", "10mm"),
+                FormFields.text(values, "length", "length", "5mm"), FormFields.text(values, "innerDiameter", "bore (ring)", "4mm"));
+        List<FormFields.TextField> block = List.of(FormFields.text(values, "width", "width (along x)", "20mm"),
+                FormFields.text(values, "depth", "depth", "10mm"), FormFields.text(values, "thickness", "thickness (along M)", "5mm"));
+        Result result = request == null ? null : new Result(request.describe(), "/charts/field.svg?" + query, CHART_WIDTH, CHART_HEIGHT);
+        View view = new View(new Layout.Frame("Field", "Field", demoPresent), problem, shape, FormFields.text(values, "br", "Br", "1.3T"),
+                cylinder, block, result);
+        return Templates.render("field.jte", view);
     }
 }

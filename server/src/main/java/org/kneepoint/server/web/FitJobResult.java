@@ -2,37 +2,48 @@ package org.kneepoint.server.web;
 
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
+import java.util.function.ToDoubleFunction;
+import java.util.function.Function;
+import org.kneepoint.server.app.fits.JilesAthertonFitDocument;
+import org.kneepoint.server.app.fits.JilesAthertonFitParameters;
 
-/** The result of a finished Jiles–Atherton fit job: Ms, a, k, c, α with their standard errors and the rms error in B. */
+/**
+ * The result of a finished Jiles–Atherton fit job (template {@code fitResult.jte}): Ms, a, k, c, α with their
+ * standard errors and the rms error in B.
+ */
 final class FitJobResult {
 
-    private static final List<Row> ROWS = List.of(new Row("ms", "Ms", "kA/m", 1000), new Row("a", "a", "A/m", 1),
-            new Row("k", "k", "A/m", 1), new Row("c", "c", "", 1), new Row("alpha", "α", "", 1));
+    private static final List<Parameter> PARAMETERS = List.of(
+            new Parameter("Ms", "kA/m", 1000, JilesAthertonFitParameters::ms, JilesAthertonFitDocument.StandardErrors::ms),
+            new Parameter("a", "A/m", 1, JilesAthertonFitParameters::a, JilesAthertonFitDocument.StandardErrors::a),
+            new Parameter("k", "A/m", 1, JilesAthertonFitParameters::k, JilesAthertonFitDocument.StandardErrors::k),
+            new Parameter("c", "", 1, JilesAthertonFitParameters::c, JilesAthertonFitDocument.StandardErrors::c),
+            new Parameter("α", "", 1, JilesAthertonFitParameters::alpha, JilesAthertonFitDocument.StandardErrors::alpha));
 
     private FitJobResult() {
     }
 
-    static String render(Map<String, Object> result) {
-        Map<?, ?> errors = (Map<?, ?>) result.get("standardErrors");
-        String grade = String.valueOf(result.get("grade"));
-        StringBuilder out = new StringBuilder("<p>").append(Html.link("/grades/" + Html.pathSegment(grade), grade))
-                .append(": fit to the ").append(Html.text(String.valueOf(result.get("curveKind")))).append(" curve</p>")
-                .append("<table class=\"numbers\"><thead><tr><th>Parameter</th><th>Value</th><th>Standard error</th><th>Unit</th></tr></thead><tbody>");
-        for (Row row : ROWS) {
-            out.append("<tr><th scope=\"row\">").append(row.label()).append("</th>").append(cell(result.get(row.key()), row.scale()))
-                    .append(cell(errors.get(row.key()), row.scale())).append("<td>").append(row.unit()).append("</td></tr>");
-        }
-        out.append("<tr><th scope=\"row\">rms error in B</th>").append(cell(result.get("rmsB"), 1)).append("<td></td><td>T</td></tr>");
-        return out.append("</tbody></table>").append(Layout.caution()).toString();
+    /** The fitted grade, the kind of curve, a row per parameter and the rms error in B, in tesla. */
+    record View(Links.Link grade, String curveKind, List<Row> rows, String rmsB) {
     }
 
-    /** One parameter's row: its key in the result, its label, the unit it is shown in and that unit's size in SI. */
-    private record Row(String key, String label, String unit, double scale) {
+    /** One parameter: its label, value and standard error in the unit shown, or "—". */
+    record Row(String label, String value, String error, String unit) {
     }
 
-    private static String cell(Object value, double scale) {
-        String text = value instanceof Number number ? String.format(Locale.ROOT, "%.4g", number.doubleValue() / scale) : "—";
-        return "<td class=\"number\">" + text + "</td>";
+    /** One parameter: its label, the unit it is shown in and that unit's size in SI, and where its value and error are. */
+    private record Parameter(String label, String unit, double scale, ToDoubleFunction<JilesAthertonFitParameters> value,
+            Function<JilesAthertonFitDocument.StandardErrors, Double> error) {
+    }
+
+    static View of(JilesAthertonFitDocument result) {
+        List<Row> rows = PARAMETERS.stream().map(parameter -> new Row(parameter.label(),
+                number(parameter.value().applyAsDouble(result.parameters()), parameter.scale()),
+                number(parameter.error().apply(result.standardErrors()), parameter.scale()), parameter.unit())).toList();
+        return new View(Links.Link.toGrade(String.valueOf(result.grade())), result.curveKind(), rows, number(result.rmsB(), 1));
+    }
+
+    private static String number(Double value, double scale) {
+        return value != null && Double.isFinite(value) ? String.format(Locale.ROOT, "%.4g", value / scale) : "—";
     }
 }

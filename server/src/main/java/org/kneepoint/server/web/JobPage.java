@@ -1,41 +1,43 @@
 package org.kneepoint.server.web;
 
+import java.util.List;
 import java.util.Locale;
-import org.kneepoint.server.http.JobKind;
-import org.kneepoint.server.http.JobProgress;
-import org.kneepoint.server.http.JobStatus;
+import org.kneepoint.server.app.fits.JilesAthertonFitDocument;
+import org.kneepoint.server.app.imports.ImportReport;
+import org.kneepoint.server.app.jobs.JobKind;
+import org.kneepoint.server.app.jobs.JobProgress;
+import org.kneepoint.server.app.jobs.JobStatus;
 
 /**
- * The page of one background job ({@code /jobs/{id}}): while the job waits or runs it shows the
- * fraction done, the stage and the job's counts (files, curves) and reloads itself every second;
- * when done it shows the job's result (the fitted parameters, or the imported files with links to
- * their grades), or the error. The page can be bookmarked: the job goes on while nobody watches.
+ * The page of one background job ({@code /jobs/{id}}, template {@code job.jte}): while the job waits or runs it
+ * shows the fraction done, the stage and the job's counts (files, curves) and reloads itself every second; when
+ * done it shows the job's result (the fitted parameters, or the imported files with links to their grades), or
+ * the error. The page can be bookmarked: the job goes on while nobody watches.
  */
 final class JobPage {
 
     private JobPage() {
     }
 
+    /**
+     * What the page shows: the job's title and state (queued, running, done, failed), its progress and counts, the
+     * result of a finished fit or import (the other null), and a failure's lead and message.
+     */
+    record View(Layout.Frame frame, String state, String percent, String fraction, String stage, List<String> counts,
+            FitJobResult.View fit, ImportJobResult.View imported, String failureLead, String failure, boolean pending) {
+    }
+
     static String render(JobStatus status, boolean demoPresent) {
-        String title = title(status.kind());
-        StringBuilder out = new StringBuilder("<h1>").append(title).append("</h1>");
         JobProgress progress = status.progress();
-        switch (status.state()) {
-            case QUEUED -> out.append("<p class=\"status\">Waiting for the jobs before it to finish.</p>");
-            case RUNNING -> out.append("<p class=\"status\">Running: ")
-                    .append(String.format(Locale.ROOT, "%.0f %%", 100 * progress.fraction()))
-                    .append(progress.stage() == null ? "" : ", " + Html.text(progress.stage())).append("</p>")
-                    .append("<progress max=\"1\" value=\"").append(String.format(Locale.ROOT, "%.3f", progress.fraction())).append("\"></progress>")
-                    .append(counts(progress));
-            case DONE -> out.append(counts(progress)).append(status.kind() == JobKind.IMPORT
-                    ? ImportJobResult.render(status.result()) : FitJobResult.render(status.result()));
-            case FAILED -> out.append("<div class=\"problem\" role=\"alert\">").append(failureLead(status))
-                    .append(Html.text(status.failure().message())).append("</div>").append(counts(progress));
-        }
-        if (status.pending()) {
-            out.append("<p class=\"hint\">This page reloads itself every second; it can be left and bookmarked, the job goes on.</p>");
-        }
-        return Layout.page(title, status.kind() == JobKind.IMPORT ? "Import" : "Library", out.toString(), demoPresent, status.pending());
+        boolean done = status.state() == JobStatus.State.DONE;
+        View view = new View(new Layout.Frame(title(status.kind()), status.kind() == JobKind.IMPORT ? "Import" : "Library", demoPresent,
+                status.pending()), status.state().name().toLowerCase(Locale.ROOT), String.format(Locale.ROOT, "%.0f %%", 100 * progress.fraction()),
+                String.format(Locale.ROOT, "%.3f", progress.fraction()), progress.stage(), counts(progress),
+                done && status.result() instanceof JilesAthertonFitDocument fit ? FitJobResult.of(fit) : null,
+                done && status.result() instanceof ImportReport report ? ImportJobResult.of(report) : null,
+                status.failure() == null ? null : failureLead(status), status.failure() == null ? null : status.failure().message(),
+                status.pending());
+        return Templates.render("job.jte", view);
     }
 
     /**
@@ -44,10 +46,10 @@ final class JobPage {
      */
     private static String failureLead(JobStatus status) {
         if (status.kind() != JobKind.IMPORT) {
-            return "";
+            return null;
         }
-        return status.failure().internal() ? "<strong>The import failed; look at the library before importing these files again.</strong> "
-                : "<strong>Nothing was imported.</strong> ";
+        return status.failure().internal() ? "The import failed; look at the library before importing these files again."
+                : "Nothing was imported.";
     }
 
     private static String title(JobKind kind) {
@@ -57,16 +59,9 @@ final class JobPage {
         };
     }
 
-    /** The counts as a list of lines such as "files: 2 of 5". */
-    private static String counts(JobProgress progress) {
-        if (progress.counts().isEmpty()) {
-            return "";
-        }
-        StringBuilder out = new StringBuilder("<ul class=\"counts\">");
-        for (JobProgress.Count count : progress.counts()) {
-            out.append("<li>").append(Html.text(count.name())).append(": ").append(count.done())
-                    .append(count.total() == null ? "" : " of " + count.total()).append("</li>");
-        }
-        return out.append("</ul>").toString();
+    /** The counts as lines such as "files: 2 of 5". */
+    private static List<String> counts(JobProgress progress) {
+        return progress.counts().stream().map(count -> count.name() + ": " + count.done() + (count.total() == null ? "" : " of " + count.total()))
+                .toList();
     }
 }

@@ -1,15 +1,17 @@
 package org.kneepoint.server.web;
 
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.kneepoint.db.LibraryReader;
 import org.kneepoint.fitter.library.GradeSummary;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.app.wording.Temperatures;
 
 /**
- * The Library page ({@code /}): every grade with its family, supplier, price, number of curves and the
- * temperatures they were taken at; a family filter and columns sorted on the server by
+ * The Library page ({@code /}, template {@code library.jte}): every grade with its family, supplier, price, number
+ * of curves and the temperatures they were taken at; a family filter and columns sorted on the server by
  * {@code ?sort=name|family|supplier|price|curves|temperature&order=asc|desc}.
  */
 final class LibraryPage {
@@ -29,54 +31,38 @@ final class LibraryPage {
     private LibraryPage() {
     }
 
+    /** What the page shows: the family filter, the family asked for (or null), the column headers and the grades. */
+    record View(Layout.Frame frame, List<FormFields.Option> families, String family, List<Header> headers, List<Row> rows) {
+    }
+
+    /** A column header: its label (with the arrow of the current order), the link that sorts by it, and its aria-sort or null. */
+    record Header(String label, String href, String ariaSort) {
+    }
+
+    /** One grade's row. */
+    record Row(Links.Link grade, boolean demo, String family, String supplier, String price, int curves, String temperatures) {
+    }
+
     static String render(LibraryReader library, String family, String sort, String order) {
         String sortKey = sort != null && SORTS.containsKey(sort) ? sort : "name";
         boolean descending = "desc".equals(order);
         Comparator<GradeSummary> comparator = SORTS.get(sortKey).thenComparing(GradeSummary::name);
         List<GradeSummary> grades = library.grades(family).stream().sorted(descending ? comparator.reversed() : comparator).toList();
         boolean demo = library.grades(null).stream().anyMatch(grade -> Layout.isDemo(grade.name()));
-        StringBuilder out = new StringBuilder("<h1>Library</h1>");
-        out.append(filter(library.families(), family));
-        if (grades.isEmpty()) {
-            out.append("<p class=\"empty\">").append(family == null
-                    ? "The library has no grades yet. Import curve files, or start with <code>kneepoint serve --demo</code>."
-                    : "No grades of family " + Html.text(family) + ".").append("</p>");
-            return Layout.page("Library", "Library", out.toString(), demo);
-        }
-        out.append("<table class=\"grades\"><thead><tr>");
-        for (String[] column : COLUMNS) {
-            out.append(header(column[0], column[1], family, sortKey, descending));
-        }
-        out.append("</tr></thead><tbody>");
-        for (GradeSummary grade : grades) {
-            out.append("<tr><td>").append(Html.link("/grades/" + Html.pathSegment(grade.name()), grade.name()))
-                    .append(Layout.isDemo(grade.name()) ? " <span class=\"tag\">invented</span>" : "")
-                    .append("</td><td>").append(Html.text(grade.family()))
-                    .append("</td><td>").append(Html.text(grade.supplier()))
-                    .append("</td><td class=\"number\">").append(grade.price() == null ? "—" : String.format(java.util.Locale.ROOT, "%.2f", grade.price()))
-                    .append("</td><td class=\"number\">").append(grade.curves())
-                    .append("</td><td>").append(Html.text(Temperatures.list(grade.temperaturesK()))).append("</td></tr>");
-        }
-        out.append("</tbody></table><p class=\"count\">").append(grades.size()).append(grades.size() == 1 ? " grade" : " grades").append("</p>");
-        return Layout.page("Library", "Library", out.toString(), demo);
+        List<FormFields.Option> families = library.families().stream()
+                .map(name -> new FormFields.Option(name, name, name.equals(family))).toList();
+        List<Header> headers = Arrays.stream(COLUMNS).map(column -> header(column[0], column[1], family, sortKey, descending)).toList();
+        List<Row> rows = grades.stream().map(grade -> new Row(Links.Link.toGrade(grade.name()), Layout.isDemo(grade.name()), grade.family(),
+                grade.supplier(), grade.price() == null ? "—" : String.format(Locale.ROOT, "%.2f", grade.price()), grade.curves(),
+                Temperatures.list(grade.temperaturesK()))).toList();
+        return Templates.render("library.jte", new View(new Layout.Frame("Library", "Library", demo), families, family, headers, rows));
     }
 
-    private static String filter(List<String> families, String selected) {
-        StringBuilder out = new StringBuilder("<form class=\"filter\" method=\"get\" action=\"/\"><label>Family "
-                + "<select name=\"family\"><option value=\"\">all families</option>");
-        for (String family : families) {
-            out.append("<option value=\"").append(Html.text(family)).append('"').append(family.equals(selected) ? " selected" : "")
-                    .append('>').append(Html.text(family)).append("</option>");
-        }
-        return out.append("</select></label> <button type=\"submit\">Show</button></form>").toString();
-    }
-
-    private static String header(String key, String label, String family, String sortKey, boolean descending) {
+    private static Header header(String key, String label, String family, String sortKey, boolean descending) {
         boolean current = key.equals(sortKey);
         String nextOrder = current && !descending ? "desc" : "asc";
-        String href = "/?sort=" + key + "&amp;order=" + nextOrder + (family == null ? "" : "&amp;family=" + Html.pathSegment(family));
+        String href = "/?sort=" + key + "&order=" + nextOrder + (family == null ? "" : "&family=" + Links.segment(family));
         String arrow = current ? (descending ? " ▼" : " ▲") : "";
-        return "<th" + (current ? " aria-sort=\"" + (descending ? "descending" : "ascending") + "\"" : "") + "><a href=\"" + href + "\">"
-                + label + arrow + "</a></th>";
+        return new Header(label + arrow, href, current ? (descending ? "descending" : "ascending") : null);
     }
 }

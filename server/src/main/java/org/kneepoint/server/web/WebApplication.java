@@ -7,9 +7,11 @@ import java.util.Collections;
 import java.util.List;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.server.app.design.GradeModelCache;
+import org.kneepoint.server.http.FormTokens;
 import org.kneepoint.server.http.HttpApi;
-import org.kneepoint.server.http.JobRegistry;
-import org.kneepoint.server.http.ServerSettings;
+import org.kneepoint.server.app.jobs.JobRegistry;
+import org.kneepoint.server.app.serving.ServerSettings;
 
 /**
  * The running web application: the JSON API and the pages on one Javalin server, over one
@@ -39,12 +41,14 @@ public final class WebApplication implements AutoCloseable {
     public static WebApplication start(Library library, ServerSettings settings, JobRegistry jobs) {
         ImportStaging staging = new ImportStaging();
         List<String> routes = Collections.synchronizedList(new ArrayList<>());
-        WebPages pages = new WebPages(library, settings, staging, jobs);
+        FormTokens forms = new FormTokens();
+        GradeModelCache models = new GradeModelCache();
+        WebPages pages = new WebPages(library, settings, staging, jobs, forms, models);
         Javalin server = Javalin.create(config -> {
             config.startup.showJavalinBanner = false;
             config.startup.showOldJavalinVersionWarning = false;
             config.events.handlerAdded(info -> routes.add(info.getHttpMethod().name() + " " + info.getPath()));
-            HttpApi.install(config, library, jobs, settings, pages::error);
+            HttpApi.install(config, library, jobs, settings, pages::error, forms, models);
             pages.install(config);
         });
         try {

@@ -2,6 +2,7 @@ package org.kneepoint.server.web;
 
 import io.javalin.config.JavalinConfig;
 import io.javalin.http.Context;
+import io.javalin.http.Handler;
 import io.javalin.http.HttpStatus;
 import java.io.IOException;
 import java.io.InputStream;
@@ -18,18 +19,21 @@ import org.kneepoint.server.chart.GradeChart;
 import org.kneepoint.server.http.DesignRequests;
 import org.kneepoint.server.http.ErrorStatus;
 import org.kneepoint.server.http.FieldRequest;
-import org.kneepoint.server.http.JobRegistry;
+import org.kneepoint.server.http.FormTokens;
+import org.kneepoint.server.http.SecurityHeaders;
+import org.kneepoint.server.app.jobs.JobRegistry;
 import org.kneepoint.server.http.GradeEditRequests;
 import org.kneepoint.server.http.JobRequests;
-import org.kneepoint.server.http.JobStatus;
-import org.kneepoint.server.http.DesignRequests.CheckRun;
-import org.kneepoint.server.http.DesignRequests.SelectionRun;
-import org.kneepoint.server.http.ServerSettings;
+import org.kneepoint.server.app.jobs.JobStatus;
+import org.kneepoint.server.app.design.CheckRun;
+import org.kneepoint.server.app.design.GradeModelCache;
+import org.kneepoint.server.app.design.SelectionRun;
+import org.kneepoint.server.app.serving.ServerSettings;
 import org.kneepoint.server.http.Uploads;
-import org.kneepoint.server.library.GradeCurves;
-import org.kneepoint.server.library.ImportPlan;
-import org.kneepoint.server.library.ImportRun;
-import org.kneepoint.server.text.Temperatures;
+import org.kneepoint.server.app.grades.GradeCurves;
+import org.kneepoint.server.app.imports.ImportPlan;
+import org.kneepoint.server.app.imports.ImportRun;
+import org.kneepoint.server.app.wording.Temperatures;
 
 /** The pages and charts of the web application and the routes that serve them. */
 final class WebPages {
@@ -42,9 +46,13 @@ final class WebPages {
     private final ImportStaging staging;
     private final String styleSheet;
     private final JobRegistry jobs;
+    private final FormTokens forms;
+    private final GradeModelCache models;
 
-    WebPages(Library library, ServerSettings settings, ImportStaging staging, JobRegistry jobs) {
+    WebPages(Library library, ServerSettings settings, ImportStaging staging, JobRegistry jobs, FormTokens forms, GradeModelCache models) {
         this.library = library;
+        this.forms = forms;
+        this.models = models;
         this.jobs = jobs;
         this.tokenRequired = settings.tokenRequired();
         this.staging = staging;
@@ -52,47 +60,53 @@ final class WebPages {
     }
 
     void install(JavalinConfig config) {
-        config.routes.get("/", context -> html(context, LibraryPage.render(library.reader(), blankToNull(context.queryParam("family")),
+        get(config, "/", context -> html(context, LibraryPage.render(library.reader(), blankToNull(context.queryParam("family")),
                 context.queryParam("sort"), context.queryParam("order"))));
-        config.routes.get("/grades/{name}", context -> html(context, GradePage.render(library.reader(), context.pathParam("name"), tokenRequired, demoPresent())));
+        get(config, "/grades/{name}", context -> html(context, GradePage.render(library.reader(), context.pathParam("name"), access(context), demoPresent())));
         config.routes.post("/grades/{name}/details", context -> {
             GradeEditRequests.fromForm(context, library);
-            context.redirect("/grades/" + Html.pathSegment(context.pathParam("name")), HttpStatus.SEE_OTHER);
+            context.redirect(Links.grade(context.pathParam("name")), HttpStatus.SEE_OTHER);
         });
-        config.routes.get("/charts/grades/{name}.svg", context -> {
+        get(config, "/charts/grades/{name}.svg", context -> {
             String name = context.pathParam("name");
             String svg = GradeChart.svg(name, GradeCurves.stored(library.reader(), name), CHART_WIDTH, CHART_HEIGHT);
-            context.contentType("image/svg+xml").result(svg);
+            svg(context, svg);
         });
-        config.routes.get("/check", this::check);
-        config.routes.get("/charts/check.svg", context -> {
-            CheckRun run = DesignRequests.check(context, library.reader());
+        get(config, "/check", this::check);
+        get(config, "/charts/check.svg", context -> {
+            CheckRun run = DesignRequests.check(context, library.reader(), models);
             String title = "Operating point at " + Temperatures.celsius(run.result().temperature());
             String svg = CheckChart.svg(title, run.model().model(), CheckChart.temperaturesOf(run.model().model(),
                     run.result().temperature(), run.result().maxWorkingTemperature()), run.result().loadLine(), CHART_WIDTH, CHART_HEIGHT);
-            context.contentType("image/svg+xml").result(svg);
+            svg(context, svg);
         });
-        config.routes.get("/select", this::select);
-        config.routes.get("/field", this::field);
-        config.routes.get("/charts/field.svg", context -> {
+        get(config, "/select", this::select);
+        get(config, "/field", this::field);
+        get(config, "/charts/field.svg", context -> {
             FieldRequest request = FieldRequest.of(context);
             String svg = FieldChart.svg("Field of a " + request.describe(), request.shape(), request.field(), FieldPage.CHART_WIDTH,
                     FieldPage.CHART_HEIGHT);
-            context.contentType("image/svg+xml").result(svg);
+            svg(context, svg);
         });
-        config.routes.get("/import", context -> html(context, ImportPage.form(tokenRequired, demoPresent())));
+        get(config, "/import", context -> html(context, ImportPage.form(access(context), demoPresent())));
         config.routes.post("/import", this::checkUpload);
         config.routes.post("/import/commit", this::commit);
         config.routes.post("/jobs/ja-fit", context -> context.redirect("/jobs/" + JobRequests.jilesAthertonFit(context, library, jobs),
                 HttpStatus.SEE_OTHER));
         config.routes.post("/jobs/import", this::commitInBackground);
-        config.routes.get("/jobs/{id}", context -> {
+        get(config, "/jobs/{id}", context -> {
             String id = context.pathParam("id");
             JobStatus status = jobs.status(id).orElseThrow(() -> new NotFoundException("no job with id '" + id
                     + "' (jobs are kept for a while only)"));
             html(context, JobPage.render(status, demoPresent()));
         });
-        config.routes.get("/style.css", context -> context.contentType("text/css; charset=utf-8").result(styleSheet));
+        get(config, "/style.css", context -> context.contentType("text/css; charset=utf-8").result(styleSheet));
+    }
+
+    /** A page or chart for GET, and the same answer without its body for HEAD (same status, type and length). */
+    private static void get(JavalinConfig config, String path, Handler handler) {
+        config.routes.get(path, handler);
+        config.routes.head(path, handler);
     }
 
     private void check(Context context) {
@@ -100,7 +114,7 @@ final class WebPages {
         String problem = null;
         if (!context.queryParamMap().isEmpty()) {
             try {
-                run = DesignRequests.check(context, library.reader());
+                run = DesignRequests.check(context, library.reader(), models);
             } catch (KneepointException e) {
                 context.status(ErrorStatus.of(e));
                 problem = e.getMessage();
@@ -114,7 +128,7 @@ final class WebPages {
         String problem = null;
         if (!context.queryParamMap().isEmpty()) {
             try {
-                run = DesignRequests.select(context, library.reader());
+                run = DesignRequests.select(context, library.reader(), models);
             } catch (KneepointException e) {
                 context.status(ErrorStatus.of(e));
                 problem = e.getMessage();
@@ -143,13 +157,13 @@ final class WebPages {
             uploads = Uploads.of(context);
             List<ImportPlan> plans = ImportRun.run(library, new ReadLimits(ServerSettings.MAX_UPLOAD_BYTES), uploads.files(), true);
             String key = staging.keep(uploads);
-            html(context, ImportPage.preview(plans, key, tokenRequired, demoPresent()));
+            html(context, ImportPage.preview(plans, key, access(context), demoPresent()));
         } catch (KneepointException e) {
             if (uploads != null) {
                 uploads.close();
             }
             context.status(400);
-            html(context, ImportPage.refused(e.getMessage(), tokenRequired, demoPresent()));
+            html(context, ImportPage.refused(e.getMessage(), access(context), demoPresent()));
         }
     }
 
@@ -163,7 +177,7 @@ final class WebPages {
             html(context, ImportPage.done(plans, demoPresent()));
         } catch (KneepointException e) {
             context.status(400);
-            html(context, ImportPage.refused(e.getMessage(), tokenRequired, demoPresent()));
+            html(context, ImportPage.refused(e.getMessage(), access(context), demoPresent()));
         }
     }
 
@@ -181,16 +195,30 @@ final class WebPages {
         if (uploads == null) {
             context.status(400);
             html(context, ImportPage.refused("These files are no longer waiting (the server keeps only the last few checks); "
-                    + "choose them again.", tokenRequired, demoPresent()));
+                    + "choose them again.", access(context), demoPresent()));
         }
         return uploads;
     }
 
-    /** The page shown to a browser for a failed request. */
+    /** The page shown to a browser for a failed request (template {@code error.jte}). */
     String error(int status, String message) {
-        String content = "<h1>" + (status == 404 ? "Not found" : "The request could not be served") + "</h1>"
-                + "<div class=\"problem\" role=\"alert\">" + Html.text(message) + "</div><p><a href=\"/\">Back to the library</a></p>";
-        return Layout.page(status == 404 ? "Not found" : "Error", "", content, false);
+        String title = status == 404 ? "Not found" : "Error";
+        return Templates.render("error.jte", new ErrorView(new Layout.Frame(title, "", false),
+                status == 404 ? "Not found" : "The request could not be served", message));
+    }
+
+    /** A failed request's page: its heading and the error's message. */
+    record ErrorView(Layout.Frame frame, String heading, String message) {
+    }
+
+    /** What the forms of the page being answered need: the session's form token, and whether to ask for the server's token. */
+    private FormAccess access(Context context) {
+        return new FormAccess(forms.issue(context), tokenRequired);
+    }
+
+    /** A chart: SVG with its own inline styles, so with the policy of charts instead of that of pages. */
+    private static void svg(Context context, String svg) {
+        context.header("Content-Security-Policy", SecurityHeaders.CHART_POLICY).contentType("image/svg+xml").result(svg);
     }
 
     private boolean demoPresent() {
