@@ -27,7 +27,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * Speed of the Jiles–Atherton model. Targets on a 2-core machine: fixed-step evaluation of a
  * 1,200-point loop ≤ 0.1 ms; adaptive simulation of a major loop to 1e-6 ≤ 1 ms; a full
  * identification of a 1,200-point loop to the noise floor ≤ 1 s. The loop is synthetic: the
- * parameter set of REFERENCES §5b (attributed to Jiles and Atherton 1986) with 0.3 % Gaussian
+ * parameter set of docs/references.md §5b (attributed to Jiles and Atherton 1986) with 0.3 % Gaussian
  * noise from a fixed seed.
  */
 @BenchmarkMode(Mode.AverageTime)
@@ -70,7 +70,7 @@ public class JilesAthertonBenchmark {
         fitter = new JilesAthertonFitter();
     }
 
-    /** One RK4 step per measured interval over a 1,200-point loop (the fit's inner evaluation). */
+    /** RK4 at 1/200 of Hmax per step over a 1,200-point loop (the fit's inner evaluation). */
     @Benchmark
     public double[] fixedStepLoopEvaluation() {
         evaluator.magnetization(model, magnetization);

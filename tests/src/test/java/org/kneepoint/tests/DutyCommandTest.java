@@ -16,7 +16,7 @@ class DutyCommandTest {
 
     @Test
     void loss_of_the_hot_step_stays_after_cooling() throws IOException {
-        // DESIGN §4: the worst point so far sets the recoil line
+        // docs/design.md §4: the worst point so far sets the recoil line
         String[] args = (GRADE + " --json").split(" ");
         String[] all = new String[args.length + 3];
         all[0] = "duty";
@@ -28,7 +28,7 @@ class DutyCommandTest {
         JsonNode json = new ObjectMapper().readTree(run.out());
         JsonNode steps = json.get("steps");
         assertEquals(3, steps.size());
-        assertEquals(0.0, steps.get(0).get("irreversibleLossPercent").asDouble(), 0.0);
+        assertEquals(0.0, steps.get(0).get("irreversibleLossPercent").asDouble(), 1e-6);
         double hot = steps.get(1).get("irreversibleLossPercent").asDouble();
         assertTrue(hot > 0);
         assertEquals(hot, steps.get(2).get("irreversibleLossPercent").asDouble(), 0.0);
@@ -60,5 +60,29 @@ class DutyCommandTest {
         assertEquals(2, run.exitCode(), run.err());
         assertEquals("", run.out());
         assertEquals(1, run.err().strip().lines().count(), run.err());
+    }
+
+    @Test
+    void a_step_may_give_its_field_as_an_external_field_on_a_free_magnet() throws IOException {
+        // Pc 1, so N = 1/2 and an external 150 kA/m acts as a circuit field of 300 kA/m (Ha = Hext/(1 − N), docs/design.md §4)
+        String[] args = (GRADE + " --json").split(" ");
+        String[] external = new String[args.length + 3];
+        external[0] = "duty";
+        System.arraycopy(args, 0, external, 1, args.length);
+        external[args.length + 1] = "--steps";
+        external[args.length + 2] = "150C:150kA/m:external, 150C:300kA/m:opposing";
+        CliRun run = CliRun.of(external);
+        assertEquals(0, run.exitCode(), run.err());
+        JsonNode steps = new ObjectMapper().readTree(run.out()).get("steps");
+        assertEquals("external", steps.get(0).get("fieldConvention").asText());
+        assertEquals(1.5e5, steps.get(0).get("externalFieldH").asDouble(), 1e-9);
+        assertEquals(3e5, steps.get(0).get("opposingField").asDouble(), 1e-6);
+        assertEquals("opposing", steps.get(1).get("fieldConvention").asText());
+        assertTrue(steps.get(1).get("externalFieldH").isNull());
+        assertEquals(steps.get(0).get("stepLossPercent").asDouble(), steps.get(1).get("stepLossPercent").asDouble(), 1e-9);
+        external[args.length + 2] = "150C:150kA/m:sideways";
+        CliRun bad = CliRun.of(external);
+        assertEquals(2, bad.exitCode());
+        assertTrue(bad.err().contains("step 1: the field's kind must be 'opposing' or 'external', got 'sideways'"), bad.err());
     }
 }

@@ -43,6 +43,34 @@ class FieldCommandTest {
     }
 
     @Test
+    void a_point_on_a_cylinders_rim_gives_null_and_a_reason_never_nan() throws IOException {
+        // the bug: exit 0 with "b": ["NaN", ...] on the rim, where the field of a sharp edge is infinite
+        CliRun run = CliRun.of("field", "cylinder", "--diameter", "10mm", "--length", "5mm", "--br", "1.3T", "--at",
+                "5,0,2.5mm", "--json");
+        assertEquals(0, run.exitCode(), run.err());
+        assertTrue(!run.out().contains("NaN") && !run.out().contains("Infinity"), run.out());
+        JsonNode json = new ObjectMapper().readTree(run.out());
+        assertTrue(json.get("b").isNull(), run.out());
+        assertTrue(json.get("reason").asText().contains("rim"), run.out());
+        CliRun table = CliRun.of("field", "cylinder", "--diameter", "10mm", "--length", "5mm", "--br", "1.3T", "--at",
+                "5,0,-2.5mm");
+        assertTrue(table.out().contains("not defined: on the rim"), table.out());
+    }
+
+    @Test
+    void far_from_a_block_along_its_diagonal_the_field_is_the_dipoles() throws IOException {
+        // the bug: 35 % off with the wrong sign at 10⁵ sizes. Dipole m = Br·V/μ0 along z; on the diagonal
+        // u = (1, 1, 1)/√3 the dipole field is B = (μ0/4π)·m·(3(ẑ·u)u − ẑ)/r³ = Br·V/(4π·r³)·(1, 1, 0)
+        double r = 1e5 * 0.01 * Math.sqrt(3);
+        JsonNode json = json("field", "block", "--width", "10mm", "--depth", "10mm", "--thickness", "10mm", "--br", "1.2T",
+                "--at", "1000,1000,1000m", "--json");
+        double expected = 1.2 * 1e-6 / (4 * Math.PI * r * r * r);
+        assertEquals(expected, json.get("b").get(0).asDouble(), 1e-9 * expected);
+        assertEquals(expected, json.get("b").get(1).asDouble(), 1e-9 * expected);
+        assertEquals(0.0, json.get("b").get(2).asDouble(), 1e-9 * expected);
+    }
+
+    @Test
     void ring_table_says_whether_the_point_is_inside() {
         CliRun run = CliRun.of("field", "ring", "--diameter", "20mm", "--inner-diameter", "8mm", "--length", "5mm", "--br", "1.2T",
                 "--at", "0,0,0mm");

@@ -80,10 +80,10 @@ class FieldPageTest {
     @Test
     void bad_input_gives_a_400_page_naming_the_problem() throws Exception {
         Map<String, String> cases = Map.of(
-                "shape=cylinder&diameter=-10mm&length=5mm&br=1.3T", "query parameter &#39;diameter&#39;",
-                "shape=cylinder&diameter=10mm&length=5mm", "query parameter &#39;br&#39;",
+                "shape=cylinder&diameter=-10mm&length=5mm&br=1.3T", "query parameter 'diameter'",
+                "shape=cylinder&diameter=10mm&length=5mm", "query parameter 'br'",
                 "shape=sphere&diameter=10mm&length=5mm&br=1.3T", "expected one of cylinder, ring, block",
-                "diameter=10mm&length=5mm&br=1.3T", "query parameter &#39;shape&#39;",
+                "diameter=10mm&length=5mm&br=1.3T", "query parameter 'shape'",
                 "shape=cylinder&diameter=10mm&length=50m&br=1.3T", "length/diameter");
         for (Map.Entry<String, String> bad : cases.entrySet()) {
             HttpResponse<String> response = get("/field?" + bad.getKey());

@@ -27,7 +27,7 @@ import org.kneepoint.fitter.units.SusceptibilityForm;
  */
 final class FitTestData {
 
-    /** The soft-iron-like parameter set the benchmarks use (REFERENCES §5b). */
+    /** The soft-iron-like parameter set the benchmarks use (docs/references.md §5b). */
     static final JilesAthertonParameters SOFT_IRON = new JilesAthertonParameters(1.6e6, 1100, 400, 0.2, 1.6e-3);
     static final double H_MAX = 5000;
     static final String GRADE = "Invented soft iron";

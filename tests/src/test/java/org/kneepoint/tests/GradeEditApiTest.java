@@ -94,17 +94,16 @@ class GradeEditApiTest {
         String notes = "<script>alert(1)</script> & \"quoted\"";
         String form = "version=2&supplier=Supplier%20North%20(invented)&density=7300%20kg%2Fm3&price=50&notes="
                 + URLEncoder.encode(notes, StandardCharsets.UTF_8);
-        HttpResponse<String> saved = server.post("/grades/DEMO%20AlNiCo%208/details", HttpRequest.BodyPublishers.ofString(form),
-                "application/x-www-form-urlencoded");
+        HttpResponse<String> saved = server.submit("/grades/DEMO%20AlNiCo%208/details", form);
         assertEquals(303, saved.statusCode(), saved.body());
         assertEquals("/grades/DEMO%20AlNiCo%208", saved.headers().firstValue("Location").orElseThrow());
         String after = server.get("/grades/DEMO%20AlNiCo%208").body();
         assertTrue(after.contains("50.00 per kg"), "the new price is shown");
-        assertTrue(after.contains("&lt;script&gt;alert(1)&lt;/script&gt; &amp; &quot;quoted&quot;"), "notes escaped");
+        assertTrue(after.contains("<dd>&lt;script&gt;alert(1)&lt;/script&gt; &amp; \"quoted\"</dd>"), "notes escaped as text");
+        assertTrue(after.contains("value=\"&lt;script>alert(1)&lt;/script> &amp; &#34;quoted&#34;\""), "notes escaped in the form's field");
         assertFalse(after.contains("<script>alert(1)"));
 
-        HttpResponse<String> stale = server.post("/grades/DEMO%20AlNiCo%208/details", HttpRequest.BodyPublishers.ofString(form),
-                "application/x-www-form-urlencoded", "Accept", "text/html");
+        HttpResponse<String> stale = server.submit("/grades/DEMO%20AlNiCo%208/details", form, "Accept", "text/html");
         assertEquals(409, stale.statusCode());
         assertTrue(stale.body().contains("changed by someone else since version 2 (it is now at version 3)"), stale.body());
     }

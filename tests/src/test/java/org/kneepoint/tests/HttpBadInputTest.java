@@ -25,7 +25,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.kneepoint.server.http.ServerSettings;
+import org.kneepoint.server.app.serving.ServerSettings;
 
 class HttpBadInputTest {
 
@@ -97,6 +97,10 @@ class HttpBadInputTest {
         "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1e99A%2Fm&temperature=120C|hcj",
         "/api/check?diameter=10mm&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|length",
         "/api/check?diameter=10mm&length=5mm&factor=worst&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C|factor",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&tolerance=br%3D%C2%B1|tolerance",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&tolerance=flux%3D1%25|tolerance",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&tolerance=br%3D%C2%B11%25&samples=1|samples",
+        "/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C&tolerance=br%3D%C2%B11%25&distribution=flat|distribution",
         "/api/select?pc=2|temperature",
         "/api/select?pc=2&temperature=100C&sort=cost|sort",
         "/api/select?pc=2&temperature=100C&minFluxDensity=1kg|minFluxDensity",

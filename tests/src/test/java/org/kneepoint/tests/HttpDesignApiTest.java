@@ -1,6 +1,7 @@
 package org.kneepoint.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -74,6 +75,33 @@ class HttpDesignApiTest {
     }
 
     @Test
+    void check_with_an_external_field_is_the_cli_check_and_the_page_says_everything_it_knows() throws Exception {
+        JsonNode check = ok(server.get("/api/check?grade=DEMO%20NdFeB%2042%2F100&diameter=10mm&length=5mm&temperature=80C"
+                + "&externalField=100kA%2Fm"));
+        assertEquals(cli("check", "DEMO NdFeB 42/100", "--diameter", "10mm", "--length", "5mm", "--temperature", "80C",
+                "--external-field", "100kA/m", "--json", "--db", cliDb), check);
+        assertEquals("external", check.get("fieldConvention").asText());
+        assertFalse(check.get("localCheck").isNull());
+        HttpResponse<String> page = server.get("/check?grade=DEMO%20NdFeB%2042%2F100&diameter=10mm&length=5mm&temperature=80C"
+                + "&externalField=100kA%2Fm");
+        assertEquals(200, page.statusCode());
+        for (String words : new String[] {"knee (J = 0.9·Br) at this temperature", "margin to the knee", "minimum working temperature",
+            "maximum working temperature", "local check", "uniform external field on a free magnet"}) {
+            assertTrue(page.body().contains(words), words);
+        }
+    }
+
+    @Test
+    void both_field_conventions_at_once_or_a_typed_in_grade_without_coefficients_are_a_400() throws Exception {
+        HttpResponse<String> both = server.get("/api/check?pc=2&" + TYPED + "&temperature=120C&opposingField=1kA%2Fm&externalField=1kA%2Fm");
+        assertEquals(400, both.statusCode());
+        assertTrue(both.body().contains("give either opposingField (circuit convention) or externalField"), both.body());
+        HttpResponse<String> flat = server.get("/api/check?pc=2&br=1.3T&muRec=1.05&hcj=1600kA%2Fm&temperature=120C");
+        assertEquals(400, flat.statusCode());
+        assertTrue(flat.body().contains("needs alpha and beta"), flat.body());
+    }
+
+    @Test
     void select_ranks_the_library_as_the_cli_does() throws Exception {
         JsonNode ranked = ok(server.get("/api/select?pc=2&temperature=100C&minFluxDensity=0.5T&maxLoss=2%25&sort=margin"));
         assertEquals(cli("select", "--pc", "2", "--temperature", "100C", "--min-flux-density", "0.5T", "--max-loss", "2%",
@@ -95,6 +123,15 @@ class HttpDesignApiTest {
                 ok(server.get("/api/field/ring?diameter=20mm&innerDiameter=8mm&length=5mm&br=1.3T&at=2,0,3mm")));
         assertEquals(cli("field", "block", "--width", "10mm", "--depth", "8mm", "--thickness", "4mm", "--br", "1.2T", "--at", "1,2,3mm",
                 "--json"), ok(server.get("/api/field/block?width=10mm&depth=8mm&thickness=4mm&br=1.2T&at=1,2,3mm")));
+    }
+
+    @Test
+    void field_on_a_blocks_corner_is_null_with_a_reason_as_in_the_cli() throws Exception {
+        JsonNode api = ok(server.get("/api/field/block?width=10mm&depth=8mm&thickness=4mm&br=1.2T&at=5,4,2mm"));
+        assertEquals(cli("field", "block", "--width", "10mm", "--depth", "8mm", "--thickness", "4mm", "--br", "1.2T", "--at",
+                "5,4,2mm", "--json"), api);
+        assertTrue(api.get("b").isNull(), api.toString());
+        assertTrue(api.get("reason").asText().contains("corner"), api.toString());
     }
 
     @Test

@@ -13,7 +13,7 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.kneepoint.server.http.ServerSettings;
+import org.kneepoint.server.app.serving.ServerSettings;
 
 class HttpWriteTokenTest {
 

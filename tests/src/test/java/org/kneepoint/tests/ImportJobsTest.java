@@ -26,9 +26,9 @@ import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.server.http.ImportJob;
-import org.kneepoint.server.http.JobKind;
-import org.kneepoint.server.http.JobRegistry;
-import org.kneepoint.server.library.ImportStep;
+import org.kneepoint.server.app.jobs.JobKind;
+import org.kneepoint.server.app.jobs.JobRegistry;
+import org.kneepoint.server.app.imports.ImportStep;
 
 /** Imports as background jobs: the route, its progress, failures inside the job, and the Import page's background commit. */
 class ImportJobsTest {
@@ -79,7 +79,7 @@ class ImportJobsTest {
             assertEquals("queued", waiting.get("state").asText());
             assertEquals(0, waiting.get("counts").size());
             release.countDown();
-            JsonNode status = waitUntilEnded(server, id);
+            JsonNode status = server.jobWhenEnded(id);
             assertEquals("done", status.get("state").asText(), status.toString());
             assertEquals("import", status.get("kind").asText());
             assertEquals(1.0, status.get("fraction").asDouble());
@@ -118,7 +118,7 @@ class ImportJobsTest {
             HttpResponse<String> started = server.upload("/api/jobs/import", files, Map.of());
             assertEquals(202, started.statusCode(), started.body());
             String id = RunningServer.json(started).get("id").asText();
-            JsonNode status = waitUntilEnded(server, id);
+            JsonNode status = server.jobWhenEnded(id);
             assertEquals("failed", status.get("state").asText(), status.toString());
             String message = status.get("error").asText();
             assertTrue(message.startsWith("broken.csv, line 6, column 2") && !message.contains("\n"), message);
@@ -140,7 +140,7 @@ class ImportJobsTest {
             Map<String, Integer> before = server.rowCounts();
             HttpResponse<String> started = server.upload("/api/jobs/import", files, Map.of());
             assertEquals(202, started.statusCode(), started.body());
-            JsonNode status = waitUntilEnded(server, RunningServer.json(started).get("id").asText());
+            JsonNode status = server.jobWhenEnded(RunningServer.json(started).get("id").asText());
             assertEquals("failed", status.get("state").asText(), status.toString());
             assertTrue(status.get("error").asText().contains("grade 'DEMO NdFeB 42/100' is stored as family"), status.toString());
             assertEquals("CONFLICT", status.get("errorCode").asText());
@@ -167,7 +167,7 @@ class ImportJobsTest {
             assertEquals(before, server.rowCounts());
             HttpResponse<String> started = server.upload("/api/jobs/import", files, Map.of(), "Authorization", "Bearer s3cret-token");
             assertEquals(202, started.statusCode(), started.body());
-            assertEquals("done", waitUntilEnded(server, RunningServer.json(started).get("id").asText()).get("state").asText());
+            assertEquals("done", server.jobWhenEnded(RunningServer.json(started).get("id").asText()).get("state").asText());
         }
     }
 
@@ -179,18 +179,17 @@ class ImportJobsTest {
             assertTrue(preview.body().contains("formaction=\"/jobs/import\""), preview.body());
             Matcher staged = Pattern.compile("name=\"staged\" value=\"([^\"]+)\"").matcher(preview.body());
             assertTrue(staged.find());
-            HttpResponse<String> redirect = server.post("/jobs/import", HttpRequest.BodyPublishers.ofString("staged="
-                    + URLEncoder.encode(staged.group(1), StandardCharsets.UTF_8)), "application/x-www-form-urlencoded");
+            HttpResponse<String> redirect = server.submit("/jobs/import", "staged="
+                    + URLEncoder.encode(staged.group(1), StandardCharsets.UTF_8));
             assertEquals(303, redirect.statusCode(), redirect.body());
             String location = redirect.headers().firstValue("Location").orElseThrow();
             assertTrue(location.matches("/jobs/[0-9a-f]{32}"), location);
-            assertEquals("done", waitUntilEnded(server, location.substring("/jobs/".length())).get("state").asText());
+            assertEquals("done", server.jobWhenEnded(location.substring("/jobs/".length())).get("state").asText());
             String page = server.get(location).body();
             assertTrue(page.contains("<td>" + ESCAPED_FILE + "</td>"), page);
             assertTrue(page.contains("href=\"/grades/%3Cscript%3Ealert%281%29%3C%2Fscript%3E\">" + ESCAPED + "</a>"), page);
             assertFalse(page.contains(SCRIPT) || page.contains(HOSTILE_FILE));
-            HttpResponse<String> again = server.post("/jobs/import", HttpRequest.BodyPublishers.ofString("staged=" + staged.group(1)),
-                    "application/x-www-form-urlencoded");
+            HttpResponse<String> again = server.submit("/jobs/import", "staged=" + staged.group(1));
             assertEquals(400, again.statusCode());
             assertTrue(again.body().contains("no longer waiting"));
         }
@@ -199,14 +198,17 @@ class ImportJobsTest {
     @Test
     void a_running_import_job_page_shows_the_file_and_the_counts_as_escaped_text() throws Exception {
         CountDownLatch release = new CountDownLatch(1);
+        CountDownLatch reported = new CountDownLatch(1);
         JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
         try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
             String id = jobs.submit(JobKind.IMPORT, progress -> {
                 progress.accept(ImportJob.progressOf(new ImportStep(ImportStep.Stage.CHARACTERIZING, HOSTILE_FILE, 1, 3, 2, 5)));
+                reported.countDown();
                 awaitQuietly(release);
                 return Map.of("files", List.of());
             }).orElseThrow();
-            String page = waitUntilPage(server, id, "characterizing");
+            assertTrue(reported.await(60, TimeUnit.SECONDS), "the job reported its progress");
+            String page = server.get("/jobs/" + id).body();
             assertTrue(page.contains("<meta http-equiv=\"refresh\" content=\"1\">"), page);
             assertTrue(page.contains("Running: 25 %, characterizing the curves of " + ESCAPED_FILE), page);
             assertTrue(page.contains("<li>files checked: 1 of 3</li><li>curves characterized: 2</li>"), page);
@@ -226,37 +228,13 @@ class ImportJobsTest {
             String id = jobs.submit(JobKind.IMPORT, progress -> {
                 throw new IllegalStateException("the database went away");
             }).orElseThrow();
-            JsonNode status = waitUntilEnded(server, id);
+            JsonNode status = server.jobWhenEnded(id);
             assertEquals("failed", status.get("state").asText());
             assertEquals("INTERNAL", status.get("errorCode").asText());
             assertEquals("internal error; the server log has the details", status.get("error").asText());
             String page = server.get("/jobs/" + id).body();
             assertTrue(page.contains("The import failed; look at the library before importing these files again."), page);
             assertFalse(page.contains("Nothing was imported") || page.contains("went away"), page);
-        }
-    }
-
-    /** Polls the job's status until it has ended, for at most 60 s. */
-    private static JsonNode waitUntilEnded(RunningServer server, String id) throws Exception {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (true) {
-            JsonNode status = RunningServer.json(server.get("/api/jobs/" + id));
-            String state = status.get("state").asText();
-            if (!state.equals("queued") && !state.equals("running") || System.nanoTime() > deadline) {
-                return status;
-            }
-            Thread.sleep(50);
-        }
-    }
-
-    private static String waitUntilPage(RunningServer server, String id, String text) throws Exception {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (true) {
-            String page = server.get("/jobs/" + id).body();
-            if (page.contains(text) || System.nanoTime() > deadline) {
-                return page;
-            }
-            Thread.sleep(50);
         }
     }
 

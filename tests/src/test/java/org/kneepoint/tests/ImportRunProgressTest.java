@@ -15,8 +15,8 @@ import org.kneepoint.db.DatabaseLocation;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.importer.csv.ReadLimits;
-import org.kneepoint.server.library.ImportRun;
-import org.kneepoint.server.library.ImportStep;
+import org.kneepoint.server.app.imports.ImportRun;
+import org.kneepoint.server.app.imports.ImportStep;
 
 /** The steps an import reports as it goes, and an import overtaken by another between its check and its storing. */
 class ImportRunProgressTest {

@@ -23,10 +23,10 @@ import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.kneepoint.server.http.JobKind;
-import org.kneepoint.server.http.JobProgress;
-import org.kneepoint.server.http.JobRegistry;
-import org.kneepoint.server.http.JobWork;
+import org.kneepoint.server.app.jobs.JobKind;
+import org.kneepoint.server.app.jobs.JobProgress;
+import org.kneepoint.server.app.jobs.JobRegistry;
+import org.kneepoint.server.app.jobs.JobWork;
 
 /** Background jobs: a Jiles–Atherton fit started over HTTP, its status, its page, and the bounds of the queue. */
 class JobsTest {
@@ -52,7 +52,7 @@ class JobsTest {
             assertEquals("/jobs/" + id, RunningServer.json(started).get("page").asText());
             JsonNode operation = RunningServer.json(server.get("/api/openapi.json")).get("paths").get("/api/jobs/ja-fit").get("post");
             assertTrue(operation.get("responses").has("202") && !operation.has("requestBody"), operation.toString());
-            JsonNode status = waitUntilEnded(server, id);
+            JsonNode status = server.jobWhenEnded(id);
             assertEquals("done", status.get("state").asText(), status.toString());
             assertEquals(expected, status.get("result"));
             assertEquals("ja-fit", status.get("kind").asText());
@@ -89,10 +89,12 @@ class JobsTest {
     @Test
     void a_full_queue_refuses_and_a_waiting_job_page_reloads_itself() throws Exception {
         CountDownLatch release = new CountDownLatch(1);
+        CountDownLatch reported = new CountDownLatch(1);
         JobRegistry jobs = new JobRegistry(1, 1, 10, Duration.ofHours(1), System::nanoTime);
         try (RunningServer server = RunningServer.withJobs(folder, jobs)) {
             Optional<String> running = jobs.submit(JobKind.JA_FIT, progress -> {
                 progress.accept(new JobProgress(0.5, "global search", List.of()));
+                reported.countDown();
                 awaitQuietly(release);
                 return Map.of("finished", true);
             });
@@ -103,12 +105,13 @@ class JobsTest {
             assertEquals(429, refused.statusCode(), refused.body());
             String waiting = server.get("/jobs/" + queued.get()).body();
             assertTrue(waiting.contains("<meta http-equiv=\"refresh\" content=\"1\">"), waiting);
-            String runningPage = waitUntilReported(server, running.get());
+            assertTrue(reported.await(60, TimeUnit.SECONDS), "the job reported its progress");
+            String runningPage = server.get("/jobs/" + running.get()).body();
             assertTrue(runningPage.contains("<meta http-equiv=\"refresh\" content=\"1\">"), runningPage);
             assertTrue(runningPage.contains("Running: 50 %, global search"), runningPage);
             release.countDown();
-            assertEquals("done", waitUntilEnded(server, running.get()).get("state").asText());
-            assertTrue(waitUntilEnded(server, running.get()).get("result").get("finished").asBoolean());
+            assertEquals("done", server.jobWhenEnded(running.get()).get("state").asText());
+            assertTrue(server.jobWhenEnded(running.get()).get("result").get("finished").asBoolean());
         } finally {
             release.countDown();
         }
@@ -168,39 +171,13 @@ class JobsTest {
     }
 
     private static void waitUntilDone(JobRegistry jobs, String id) throws InterruptedException {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (jobs.status(id).orElseThrow().pending() && System.nanoTime() < deadline) {
-            Thread.sleep(20);
-        }
+        jobs.awaitEnd(id, Duration.ofSeconds(60)).orElseThrow();
     }
 
     private static HttpResponse<String> post(RunningServer server, String pathAndQuery) throws IOException, InterruptedException {
-        return server.post(pathAndQuery, HttpRequest.BodyPublishers.noBody(), "application/x-www-form-urlencoded");
-    }
-
-    /** Polls the job's status until it has ended, for at most 60 s. */
-    private static JsonNode waitUntilEnded(RunningServer server, String id) throws Exception {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (true) {
-            JsonNode status = RunningServer.json(server.get("/api/jobs/" + id));
-            String state = status.get("state").asText();
-            if (!state.equals("queued") && !state.equals("running") || System.nanoTime() > deadline) {
-                return status;
-            }
-            Thread.sleep(100);
-        }
-    }
-
-    /** The job's page once the job has reported progress, polled for at most 60 s. */
-    private static String waitUntilReported(RunningServer server, String id) throws Exception {
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (true) {
-            String page = server.get("/jobs/" + id).body();
-            if (page.contains("global search") || System.nanoTime() > deadline) {
-                return page;
-            }
-            Thread.sleep(100);
-        }
+        return pathAndQuery.startsWith("/api/")
+                ? server.post(pathAndQuery, HttpRequest.BodyPublishers.noBody(), "application/x-www-form-urlencoded")
+                : server.submit(pathAndQuery, "");
     }
 
     private static void awaitQuietly(CountDownLatch latch) {

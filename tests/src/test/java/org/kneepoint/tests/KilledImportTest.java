@@ -14,7 +14,7 @@ import org.kneepoint.db.Library;
 
 /**
  * A child JVM killed with SIGKILL in the middle of a large import leaves the library exactly as it
- * was before, and the library opens cleanly afterwards (one transaction per import, DESIGN §5).
+ * was before, and the library opens cleanly afterwards (one transaction per import, docs/design.md §5).
  */
 class KilledImportTest {
 
@@ -46,7 +46,7 @@ class KilledImportTest {
 
         try (Library library = Library.open(DatabaseLocation.ofFolder(libraryFolder))) {
             assertEquals(before, library.reader().rowCounts());
-            assertTrue(library.reader().importWithChecksum(org.kneepoint.server.library.FileChecksum.sha256(big)).isEmpty());
+            assertTrue(library.reader().importWithChecksum(org.kneepoint.server.app.imports.FileChecksum.sha256(big)).isEmpty());
         }
         CliRun grades = CliRun.of("grades", "--json", "--db", libraryFolder.toString());
         assertEquals(0, grades.exitCode(), grades.err());

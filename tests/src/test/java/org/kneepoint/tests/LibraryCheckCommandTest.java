@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.kneepoint.server.library.DemoLibrary;
+import org.kneepoint.server.app.demo.DemoLibrary;
 
 class LibraryCheckCommandTest {
 
@@ -48,7 +48,10 @@ class LibraryCheckCommandTest {
         List<String> keys = new ArrayList<>();
         json.fieldNames().forEachRemaining(keys::add);
         assertEquals(List.of("pc", "operatingPoint", "reversibleLossPercent", "irreversibleLossPercent", "kneeMarginH",
-                "maxWorkingTemperatureK", "extrapolated", "cautions"), keys);
+                "maxWorkingTemperatureK", "extrapolated", "cautions", "kneeField", "kneeMarginTemperatureK", "maxWorkingTemperatureStop",
+                "lossLimitPercent", "localCheck", "fieldConvention", "opposingFieldH", "externalFieldH",
+                "demagnetizingFactor", "minWorkingTemperatureK", "minWorkingTemperatureStop", "operatingPointExtrapolated",
+                "lossExtrapolated", "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField"), keys);
         assertFalse(json.get("extrapolated").asBoolean());
         assertTrue(json.get("maxWorkingTemperatureK").asDouble() < 373.15, json.toString());
         assertEquals(3, json.get("cautions").size());
@@ -63,7 +66,7 @@ class LibraryCheckCommandTest {
         CliRun table = CliRun.of("check", "DEMO NdFeB 42/100", "--pc", "1", "--temperature", "130C", "--db", db);
         assertEquals(0, table.exitCode(), table.err());
         assertTrue(table.out().contains("extrapolated         yes"), table.out());
-        assertTrue(table.out().contains("DEMO NdFeB 42/100 (temperature model of 4 curves"), table.out());
+        assertTrue(table.out().contains("DEMO NdFeB 42/100 (4 curves measured at 20 °C to 100 °C"), table.out());
         assertTrue(table.out().contains("implanted medical devices"), table.out());
     }
 
@@ -78,13 +81,15 @@ class LibraryCheckCommandTest {
     @Test
     void hot_ndfeb_under_a_strong_opposing_field_loses_flux_while_smco_does_not() throws IOException {
         // Common practice: SmCo keeps its coercivity when hot, NdFeB does not (HcJ falls by roughly 0.2–0.3 %/K for SmCo
-        // and 0.5–0.6 %/K for NdFeB, from memory), so at 150 °C and 800 kA/m against it SmCo stays above its knee.
+        // and 0.5–0.6 %/K for NdFeB, from memory), so at 150 °C and 800 kA/m against it SmCo stays above its knee. The recoil
+        // line through its operating point still counts the start of the knee's bend (issue 11): a tenth of a per cent.
         String[] design = {"--pc", "1", "--temperature", "150C", "--opposing-field", "800kA/m"};
         JsonNode ndfeb = json(prepend("check", "DEMO NdFeB 40/160", design));
         JsonNode smco = json(prepend("check", "DEMO SmCo 28/200", design));
         assertTrue(ndfeb.get("irreversibleLossPercent").asDouble() > 1.0, ndfeb.toString());
         assertTrue(ndfeb.get("kneeMarginH").asDouble() < 0.0);
-        assertEquals(0.0, smco.get("irreversibleLossPercent").asDouble(), 0.0);
+        assertTrue(smco.get("irreversibleLossPercent").asDouble() < 0.5, smco.toString());
+        assertTrue(smco.get("irreversibleLossPercent").asDouble() < ndfeb.get("irreversibleLossPercent").asDouble() / 10);
         assertTrue(smco.get("kneeMarginH").asDouble() > 0.0);
         assertFalse(ndfeb.get("extrapolated").asBoolean());
     }
@@ -93,7 +98,7 @@ class LibraryCheckCommandTest {
     void duty_of_a_library_grade_keeps_the_loss_of_the_hot_step() throws IOException {
         JsonNode json = json("duty", "DEMO NdFeB 40/160", "--pc", "1", "--steps", "20C:0, 150C:800kA/m, 20C:0");
         JsonNode steps = json.get("steps");
-        assertEquals(0.0, steps.get(0).get("irreversibleLossPercent").asDouble(), 0.0);
+        assertEquals(0.0, steps.get(0).get("irreversibleLossPercent").asDouble(), 1e-6);
         double hot = steps.get(1).get("irreversibleLossPercent").asDouble();
         assertTrue(hot > 1.0);
         assertEquals(hot, steps.get(2).get("irreversibleLossPercent").asDouble(), 0.0);

@@ -245,12 +245,25 @@ class LibraryCommandsTest {
     }
 
     @Test
-    void control_characters_in_names_never_reach_the_terminal_raw() throws IOException {
+    void control_characters_in_names_are_refused_by_import_and_never_reach_the_terminal_raw() throws IOException {
         String name = "Red\u001b[31m grade\u0007";
         String json = "{\"grade\": \"" + name.replace("\u001b", "\\u001b").replace("\u0007", "\\u0007")
                 + "\", \"family\": \"invented\", \"temperature\": \"20 °C\", \"columns\": [\"H [kA/m]\", \"J [T]\"],"
                 + " \"rows\": [[50, 1.2913], [0, 1.2888], [-400, 1.2636], [-800, 1.2382], [-1500, 0]]}";
-        assertEquals(0, CliRun.of("import", file("escape.json", json).toString(), "--db", db()).exitCode());
+        CliRun refused = CliRun.of("import", file("escape.json", json).toString(), "--db", db());
+        assertEquals(2, refused.exitCode());
+        assertEquals("kneepoint: escape.json, line 1: grade holds U+001B (a control character) at character 4; names may not hold control"
+                + " or bidirectional formatting characters", refused.err().strip());
+        assertFalse(refused.err().contains("\u001b"));
+        // A library written before names were checked may still hold one: store it directly and list it.
+        try (Library library = Library.open(DatabaseLocation.ofFolder(folder.resolve("library")))) {
+            var curve = org.kneepoint.fitter.curve.DemagnetizationCurve.of(org.kneepoint.fitter.curve.Quantity.J,
+                    new double[] {0, -4e5, -8e5}, new double[] {1.2888, 1.2636, 1.2382}, 293.15);
+            var info = new org.kneepoint.fitter.library.ImportInfo("old.json", "b".repeat(64), java.time.Instant.parse("2026-01-01T00:00:00Z"), 1, 3, 0);
+            library.writer().importBatches(List.of(new org.kneepoint.fitter.library.ImportBatch(info,
+                    List.of(new org.kneepoint.fitter.library.GradeInfo(name, "invented", null, null, null, "stored directly")),
+                    List.of(new LibraryCurve(name, curve, "old.json", "b".repeat(64))), List.of())));
+        }
         CliRun table = CliRun.of("grades", "--db", db());
         assertFalse(table.out().contains("\u001b"), table.out());
         assertTrue(table.out().contains("Red\\u001b[31m grade\\u0007"), table.out());

@@ -12,7 +12,7 @@ import org.kneepoint.fitter.error.ConflictException;
 import org.kneepoint.fitter.library.GradeInfo;
 import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.importer.json.BackupCodec;
-import org.kneepoint.server.library.DemoLoader;
+import org.kneepoint.server.app.demo.DemoLoader;
 
 /**
  * The same migrations, stores and backups on PostgreSQL 15. tests/run starts a throwaway server on

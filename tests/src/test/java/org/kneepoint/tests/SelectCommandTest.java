@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
-import org.kneepoint.server.library.DemoLibrary;
+import org.kneepoint.server.app.demo.DemoLibrary;
 
 class SelectCommandTest {
 
@@ -53,10 +53,34 @@ class SelectCommandTest {
             List<String> keys = new ArrayList<>();
             row.fieldNames().forEachRemaining(keys::add);
             assertEquals(List.of("grade", "family", "assessable", "pass", "reasons", "fluxDensity", "kneeMarginH",
-                    "irreversibleLossPercent", "maxWorkingTemperatureK", "extrapolated", "price"), keys);
+                    "irreversibleLossPercent", "maxWorkingTemperatureK", "extrapolated", "price", "fieldConvention", "minWorkingTemperatureK",
+                    "beyondMeasuredField"), keys);
             assertTrue(row.get("reasons").isArray());
             assertEquals(row.get("pass").asBoolean(), row.get("reasons").isEmpty(), row.toString());
         }
+    }
+
+    @Test
+    void each_row_carries_the_field_convention_and_the_working_temperatures_of_the_same_check() throws IOException {
+        JsonNode rows = select("--pc", "1", "--temperature", "100C", "--external-field", "150kA/m");
+        int checked = 0;
+        for (JsonNode row : rows) {
+            assertEquals("external", row.get("fieldConvention").asText(), row.toString());
+            if (!row.get("assessable").asBoolean() || checked >= 3) {
+                continue;
+            }
+            CliRun run = CliRun.of("check", row.get("grade").asText(), "--pc", "1", "--temperature", "100C", "--external-field",
+                    "150kA/m", "--db", db, "--json");
+            assertEquals(0, run.exitCode(), run.err());
+            JsonNode check = new ObjectMapper().readTree(run.out());
+            assertEquals(check.get("minWorkingTemperatureK").asDouble(), row.get("minWorkingTemperatureK").asDouble(), 1e-9, row.toString());
+            assertEquals(check.get("maxWorkingTemperatureK").asDouble(), row.get("maxWorkingTemperatureK").asDouble(), 1e-9, row.toString());
+            assertEquals(check.get("irreversibleLossPercent").asDouble(), row.get("irreversibleLossPercent").asDouble(), 1e-12);
+            assertEquals(check.get("beyondMeasuredField").asBoolean(), row.get("beyondMeasuredField").asBoolean());
+            checked++;
+        }
+        assertEquals(3, checked);
+        assertEquals("opposing", select("--pc", "1", "--temperature", "100C").get(0).get("fieldConvention").asText());
     }
 
     @Test

@@ -1,6 +1,7 @@
 package org.kneepoint.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
@@ -24,7 +25,8 @@ import org.kneepoint.db.DatabaseLocation;
  * Two Kneepoint servers over one PostgreSQL library, as a team runs them: each its own pool and
  * its own in-process write lock, so only the database keeps them apart. Imports and reads through
  * both at once lose and duplicate nothing; of two edits of one grade made from the same version,
- * the second is refused with 409 (optimistic locking on the grade's row version).
+ * the second is refused with 409 (optimistic locking on the grade's row version). A curve imported through one server
+ * changes the next check and selection on the other (each server's GradeModelCache compares the grade's stamp).
  */
 class TeamServersTest {
 
@@ -34,13 +36,33 @@ class TeamServersTest {
     }
 
     @Test
+    void a_curve_imported_through_one_server_changes_the_next_check_and_selection_on_the_other() throws Exception {
+        DatabaseLocation location = new DatabaseLocation(TestPostgres.freshSchemaUrl());
+        try (RunningServer first = RunningServer.over(location); RunningServer second = RunningServer.over(location)) {
+            for (Map.Entry<Integer, Double> curve : Map.of(20, 1.30, 100, 1.22).entrySet()) {
+                assertEquals(200, first.upload("/api/import", Map.of("c" + curve.getKey() + ".csv",
+                        GradeModelCacheTest.curveFile(curve.getKey(), curve.getValue())), Map.of()).statusCode());
+            }
+            JsonNode before = GradeModelCacheTest.operatingPoint(second);
+            JsonNode rowBefore = GradeModelCacheTest.selectionRow(second);
+            assertEquals(before, GradeModelCacheTest.operatingPoint(first));
+            assertEquals(200, first.upload("/api/import", Map.of("c150.csv", GradeModelCacheTest.curveFile(150, 1.00)), Map.of())
+                    .statusCode());
+            JsonNode after = GradeModelCacheTest.operatingPoint(second);
+            assertNotEquals(before.get("b").asDouble(), after.get("b").asDouble(), "the other server kept a stale model");
+            assertNotEquals(rowBefore.get("fluxDensity").asDouble(), GradeModelCacheTest.selectionRow(second).get("fluxDensity").asDouble());
+            assertEquals(after, GradeModelCacheTest.operatingPoint(first));
+        }
+    }
+
+    @Test
     void two_servers_importing_and_reading_at_once_lose_and_duplicate_no_rows() throws Exception {
         DatabaseLocation location = new DatabaseLocation(TestPostgres.freshSchemaUrl());
         try (RunningServer first = RunningServer.over(location); RunningServer second = RunningServer.over(location)) {
             int writers = 8;
             ExecutorService pool = Executors.newFixedThreadPool(writers + 2);
             CyclicBarrier start = new CyclicBarrier(writers);
-            List<Future<Integer>> uploads = new ArrayList<>();
+            List<Future<String>> uploads = new ArrayList<>();
             for (int w = 0; w < writers; w++) {
                 RunningServer server = w % 2 == 0 ? first : second;
                 // Writers w and w+4 add curves of one grade at different temperatures; every file is its own.
@@ -48,26 +70,26 @@ class TeamServersTest {
                 String file = curveFile(grade, 20 + 40 * (w / 4));
                 uploads.add(pool.submit(() -> {
                     start.await();
-                    return server.upload("/api/import", Map.of("team-" + file.hashCode() + ".csv", file), Map.of()).statusCode();
+                    return answer(server.upload("/api/import", Map.of("team-" + file.hashCode() + ".csv", file), Map.of()));
                 }));
             }
-            List<Future<Integer>> reads = new ArrayList<>();
+            List<Future<String>> reads = new ArrayList<>();
             for (RunningServer server : List.of(first, second)) {
-                reads.add(pool.submit((Callable<Integer>) () -> {
+                reads.add(pool.submit((Callable<String>) () -> {
                     for (int i = 0; i < 20; i++) {
-                        int status = server.get("/api/grades").statusCode();
-                        if (status != 200) {
-                            return status;
+                        String answer = answer(server.get("/api/grades"));
+                        if (!answer.equals("200")) {
+                            return answer;
                         }
                     }
-                    return 200;
+                    return "200";
                 }));
             }
-            for (Future<Integer> upload : uploads) {
-                assertEquals(200, upload.get());
+            for (Future<String> upload : uploads) {
+                assertEquals("200", upload.get());
             }
-            for (Future<Integer> read : reads) {
-                assertEquals(200, read.get());
+            for (Future<String> read : reads) {
+                assertEquals("200", read.get());
             }
             pool.shutdown();
 
@@ -115,5 +137,10 @@ class TeamServersTest {
             assertEquals("quoted 2026-11", now.get("notes").asText());
             assertEquals(2, now.get("version").asInt());
         }
+    }
+
+    /** "200", or the status with the body, so a failure names the server's own words. */
+    private static String answer(HttpResponse<String> response) {
+        return response.statusCode() == 200 ? "200" : response.statusCode() + " " + response.body();
     }
 }

@@ -124,8 +124,7 @@ class WebPagesTest {
         assertEquals(before, server.rowCounts());
         Matcher staged = Pattern.compile("name=\"staged\" value=\"([0-9a-f-]+)\"").matcher(preview.body());
         assertTrue(staged.find());
-        HttpResponse<String> done = server.post("/import/commit", HttpRequest.BodyPublishers.ofString("staged=" + staged.group(1)),
-                "application/x-www-form-urlencoded");
+        HttpResponse<String> done = server.submit("/import/commit", "staged=" + staged.group(1));
         assertEquals(200, done.statusCode(), done.body());
         assertTrue(done.body().contains("imported"));
         assertEquals(before.get("grade") + 1, server.rowCounts().get("grade"));
@@ -140,8 +139,7 @@ class WebPagesTest {
         assertTrue(refused.body().contains("Nothing was imported."));
         assertTrue(refused.body().contains("broken.csv"));
         assertEquals(before, server.rowCounts());
-        HttpResponse<String> stale = server.post("/import/commit", HttpRequest.BodyPublishers.ofString("staged=unknown"),
-                "application/x-www-form-urlencoded");
+        HttpResponse<String> stale = server.submit("/import/commit", "staged=unknown");
         assertEquals(400, stale.statusCode());
         assertEquals(before, server.rowCounts());
     }
