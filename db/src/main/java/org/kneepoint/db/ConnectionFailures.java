@@ -5,8 +5,10 @@ import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.SQLTransientConnectionException;
 import javax.sql.DataSource;
+import org.jooq.Configuration;
 import org.jooq.ExecuteContext;
 import org.jooq.ExecuteListener;
+import org.jooq.ExecuteListenerProvider;
 import org.jooq.impl.DataSourceConnectionProvider;
 
 /**
@@ -42,6 +44,19 @@ final class ConnectionFailures implements ExecuteListener {
         }
         return new UnavailableException("the library database at " + location.describe() + " cannot be reached ("
                 + location.withoutPassword(reason(failure)) + "); nothing of this request was kept, try again when it is back", failure);
+    }
+
+    /**
+     * A failure raised outside jOOQ's statements (a connection's own calls: commit, rollback, isolation)
+     * translated by the configuration's {@code ConnectionFailures}, when it has one.
+     */
+    static RuntimeException translate(Configuration configuration, RuntimeException failure) {
+        for (ExecuteListenerProvider provider : configuration.executeListenerProviders()) {
+            if (provider.provide() instanceof ConnectionFailures failures) {
+                return failures.translate(failure);
+            }
+        }
+        return failure;
     }
 
     @Override

@@ -1,6 +1,7 @@
 package org.kneepoint.db;
 
 import java.sql.Connection;
+import java.sql.SQLException;
 import java.util.concurrent.locks.Lock;
 import java.util.function.Function;
 import org.jooq.DSLContext;
@@ -22,32 +23,64 @@ final class Snapshot {
     }
 
     static <T> T read(DSLContext pool, Function<DSLContext, T> read) {
-        return pool.connectionResult(connection -> {
-            if (!connection.getAutoCommit()) {
-                return read.apply(bound(pool, connection));
-            }
-            int isolation = connection.getTransactionIsolation();
-            Lock turn = pool.dialect().family() == SQLDialect.H2 ? SharedTurns.of(connection.getMetaData().getURL()).readLock() : null;
-            if (turn != null) {
-                turn.lock();
-            }
+        try {
+            return pool.connectionResult(connection -> inSnapshot(pool, connection, read));
+        } catch (RuntimeException e) {
+            throw ConnectionFailures.translate(pool.configuration(), e);
+        }
+    }
+
+    private static <T> T inSnapshot(DSLContext pool, Connection connection, Function<DSLContext, T> read) throws SQLException {
+        if (!connection.getAutoCommit()) {
+            return read.apply(bound(pool, connection));
+        }
+        int isolation = connection.getTransactionIsolation();
+        Lock turn = pool.dialect().family() == SQLDialect.H2 ? SharedTurns.of(connection.getMetaData().getURL()).readLock() : null;
+        if (turn != null) {
+            turn.lock();
+        }
+        T result;
+        try {
             connection.setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
             connection.setAutoCommit(false);
-            try {
-                T result = read.apply(bound(pool, connection));
-                connection.commit();
-                return result;
-            } catch (RuntimeException e) {
-                connection.rollback();
-                throw e;
-            } finally {
-                connection.setAutoCommit(true);
-                connection.setTransactionIsolation(isolation);
-                if (turn != null) {
-                    turn.unlock();
-                }
-            }
-        });
+            result = read.apply(bound(pool, connection));
+            connection.commit();
+        } catch (RuntimeException | SQLException e) {
+            // a lost connection fails here too; the first failure is the one to report
+            suppressInto(e, () -> connection.rollback());
+            suppressInto(e, () -> restore(connection, isolation));
+            unlock(turn);
+            throw e;
+        }
+        try {
+            restore(connection, isolation);
+        } finally {
+            unlock(turn);
+        }
+        return result;
+    }
+
+    private interface SqlStep {
+        void run() throws SQLException;
+    }
+
+    private static void suppressInto(Exception first, SqlStep step) {
+        try {
+            step.run();
+        } catch (SQLException | RuntimeException later) {
+            first.addSuppressed(later);
+        }
+    }
+
+    private static void restore(Connection connection, int isolation) throws SQLException {
+        connection.setAutoCommit(true);
+        connection.setTransactionIsolation(isolation);
+    }
+
+    private static void unlock(Lock turn) {
+        if (turn != null) {
+            turn.unlock();
+        }
     }
 
     private static DSLContext bound(DSLContext pool, Connection connection) {
