@@ -11,6 +11,7 @@ import java.util.concurrent.CyclicBarrier;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.EnumSource;
@@ -29,6 +30,7 @@ import org.kneepoint.fitter.library.StoredGrade;
  * their writes apart. Every case runs on H2 (two instances on one in-memory database) and on
  * PostgreSQL (two instances on one schema).
  */
+@Tag("slow")
 class SharedLibraryTest {
 
     private static final String FAMILY = "sintered NdFeB";

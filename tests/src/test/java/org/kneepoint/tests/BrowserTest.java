@@ -11,6 +11,7 @@ import java.time.Duration;
 import java.util.List;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
@@ -30,6 +31,7 @@ import org.openqa.selenium.support.ui.WebDriverWait;
  * in the background), checks that a grade named {@code <script>alert(1)</script>} shows as text,
  * and saves screenshots under tests/target/screenshots.
  */
+@Tag("slow")
 class BrowserTest {
 
     private static final Path SCREENSHOTS = Path.of("target", "screenshots");

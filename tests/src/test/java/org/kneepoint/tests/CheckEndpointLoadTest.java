@@ -16,6 +16,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -24,6 +25,7 @@ import org.junit.jupiter.api.io.TempDir;
  * requests), every answer must be 200 with the check's JSON. Throughput and latency percentiles are
  * written to tests/target/load-check.txt for the record; no time is asserted.
  */
+@Tag("slow")
 class CheckEndpointLoadTest {
 
     private static final int CLIENTS = 8;

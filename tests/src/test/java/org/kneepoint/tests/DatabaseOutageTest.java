@@ -14,13 +14,17 @@ import java.nio.file.attribute.PosixFilePermissions;
 import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.ResultSet;
+import java.sql.SQLException;
 import java.sql.Statement;
+import java.time.Duration;
 import java.util.Comparator;
 import java.util.Map;
 import java.util.UUID;
 import java.util.concurrent.CompletableFuture;
 import java.util.stream.Stream;
+import org.awaitility.Awaitility;
 import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.kneepoint.db.DatabaseLocation;
 
@@ -32,6 +36,7 @@ import org.kneepoint.db.DatabaseLocation;
  * The test runs its own PostgreSQL server (tests/postgres), since it stops it, with durable commits
  * (a crash must not lose what was committed before it, such as the library's tables).
  */
+@Tag("slow")
 class DatabaseOutageTest {
 
     private final Path serverFolder = createFolder();
@@ -130,19 +135,17 @@ class DatabaseOutageTest {
     }
 
     private static void waitUntilAnInsertWaitsForTheLock(String serverUrl) throws Exception {
-        long deadline = System.nanoTime() + 60_000_000_000L;
         try (Connection watcher = DriverManager.getConnection(serverUrl); Statement statement = watcher.createStatement()) {
-            while (System.nanoTime() < deadline) {
-                try (ResultSet waiting = statement.executeQuery("SELECT count(*) FROM pg_stat_activity WHERE wait_event_type = 'Lock' "
-                        + "AND query ILIKE 'insert into curve_piece%'")) {
-                    waiting.next();
-                    if (waiting.getInt(1) > 0) {
-                        return;
-                    }
-                }
-                Thread.sleep(20);
-            }
+            Awaitility.await("the import waiting for the locked table").atMost(Duration.ofSeconds(60)).pollInterval(Duration.ofMillis(20))
+                    .until(() -> insertsWaitingForALock(statement) > 0);
         }
-        throw new AssertionError("the import never reached the locked table");
+    }
+
+    private static int insertsWaitingForALock(Statement statement) throws SQLException {
+        try (ResultSet waiting = statement.executeQuery("SELECT count(*) FROM pg_stat_activity WHERE wait_event_type = 'Lock' "
+                + "AND query ILIKE 'insert into curve_piece%'")) {
+            waiting.next();
+            return waiting.getInt(1);
+        }
     }
 }

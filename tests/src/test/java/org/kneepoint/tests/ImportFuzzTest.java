@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.SplittableRandom;
 import java.util.TreeMap;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.db.DatabaseLocation;
@@ -25,6 +26,7 @@ import org.kneepoint.db.DatabaseLocation;
  * standard error, or HTTP 400 with one JSON error whose message is one line — never an internal
  * error; and the library's backup is the same, byte for byte, before and after.
  */
+@Tag("slow")
 class ImportFuzzTest {
 
     private static final int FILES = 1_100;

@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.db.DatabaseLocation;
@@ -23,6 +24,7 @@ import org.kneepoint.db.Library;
  * told), the library's folder is read-only, the disk is full (a child process whose file size
  * limit, {@code ulimit -f}, lets the import outgrow the file).
  */
+@Tag("slow")
 class LibraryFaultsTest {
 
     @TempDir

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.util.List;
 import java.util.UUID;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.kneepoint.db.DatabaseLocation;
 import org.kneepoint.db.Library;
@@ -18,6 +19,7 @@ import org.kneepoint.server.app.demo.DemoLoader;
  * The same migrations, stores and backups on PostgreSQL 15. tests/run starts a throwaway server on
  * loopback and names it in KNEEPOINT_TEST_POSTGRES_URL; each test works in a schema of its own.
  */
+@Tag("slow")
 class PostgresLibraryTest {
 
     @Test

@@ -10,10 +10,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** The packaged jar, run as a separate process the way {@code ./kneepoint} runs it. */
+@Tag("slow")
 class RunnableJarTest {
 
     private static final Path JAR = Path.of("..", "server", "target", "kneepoint.jar");

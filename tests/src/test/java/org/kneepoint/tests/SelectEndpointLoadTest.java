@@ -18,6 +18,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.function.IntFunction;
 import java.util.function.Predicate;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.kneepoint.db.DatabaseLocation;
@@ -30,6 +31,7 @@ import org.kneepoint.db.DatabaseLocation;
  * route's JSON. The numbers are written to
  * tests/target/load-select.txt for the record; no time is asserted.
  */
+@Tag("slow")
 class SelectEndpointLoadTest {
 
     private static final int GRADES = 1000;

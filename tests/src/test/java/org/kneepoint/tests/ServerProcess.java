@@ -9,12 +9,16 @@ import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalInt;
 import java.util.UUID;
 import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import org.awaitility.Awaitility;
+import org.awaitility.core.ConditionTimeoutException;
 
 /**
  * {@code kneepoint serve} in a child JVM (the test's own class path) over a library folder, with a
@@ -38,23 +42,30 @@ final class ServerProcess {
     }
 
     /** Starts the server and waits until it says where it listens. */
-    static ServerProcess start(Path library, Path logFolder) throws IOException, InterruptedException {
+    static ServerProcess start(Path library, Path logFolder) throws IOException {
         Path out = logFolder.resolve("server-" + UUID.randomUUID() + ".out");
         Process process = new ProcessBuilder(javaCommand("serve", "--db", library.toString(), "--port", "0", "--token", TOKEN))
                 .redirectErrorStream(true).redirectOutput(out.toFile()).start();
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(60);
-        while (System.nanoTime() < deadline) {
-            Matcher open = OPEN_LINE.matcher(Files.readString(out));
-            if (open.find()) {
-                return new ServerProcess(process, out, Integer.parseInt(open.group(1)));
-            }
-            if (!process.isAlive()) {
-                throw new IllegalStateException("the server ended at start: " + Files.readString(out));
-            }
-            Thread.sleep(20);
+        try {
+            int listening = Awaitility.await("the server saying where it listens").atMost(Duration.ofSeconds(60))
+                    .pollInterval(Duration.ofMillis(20)).until(() -> announcedPort(process, out), OptionalInt::isPresent).getAsInt();
+            return new ServerProcess(process, out, listening);
+        } catch (ConditionTimeoutException e) {
+            process.destroyForcibly();
+            throw new IllegalStateException("the server did not start within 60 s: " + Files.readString(out), e);
         }
-        process.destroyForcibly();
-        throw new IllegalStateException("the server did not start within 60 s: " + Files.readString(out));
+    }
+
+    /** The port of the "Open http://..." line once the server printed it; fails at once if the server ended. */
+    private static OptionalInt announcedPort(Process process, Path out) throws IOException {
+        Matcher open = OPEN_LINE.matcher(Files.readString(out));
+        if (open.find()) {
+            return OptionalInt.of(Integer.parseInt(open.group(1)));
+        }
+        if (!process.isAlive()) {
+            throw new IllegalStateException("the server ended at start: " + Files.readString(out));
+        }
+        return OptionalInt.empty();
     }
 
     /** {@code java -cp <this test's class path> KneepointCommand ARGS}. */

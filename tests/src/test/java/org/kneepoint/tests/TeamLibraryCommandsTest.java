@@ -11,6 +11,7 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -19,6 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
  * H2, restore into PostgreSQL, back again: the same bytes), editing a grade's price with its
  * version, and the message and exit code when the database cannot be reached.
  */
+@Tag("slow")
 class TeamLibraryCommandsTest {
 
     private static final ObjectMapper JSON = new ObjectMapper();

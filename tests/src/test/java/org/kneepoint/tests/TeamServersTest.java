@@ -18,6 +18,7 @@ import java.util.concurrent.CyclicBarrier;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.kneepoint.db.DatabaseLocation;
 
@@ -28,6 +29,7 @@ import org.kneepoint.db.DatabaseLocation;
  * the second is refused with 409 (optimistic locking on the grade's row version). A curve imported through one server
  * changes the next check and selection on the other (each server's GradeModelCache compares the grade's stamp).
  */
+@Tag("slow")
 class TeamServersTest {
 
     private static String curveFile(String grade, int celsius) {
