@@ -21,6 +21,11 @@ final class KneeLeastSquares {
     private final double[] j;
     private final double[] logX;
     private final double hcjFloor;
+    /** Work space of one evaluation (a fit is one thread's): t and ln t of every point, residuals, the Jacobian's columns. */
+    private final double[] reduced;
+    private final double[] logReduced;
+    private final double[] residuals;
+    private double[][] columns = new double[0][];
 
     /** The optimum: the model, the unscaled covariance (JᵀJ)⁻¹, RMS residual and the work done. */
     record Solution(KneeCurve model, double[] parameters, double[][] inverseNormalMatrix, double rms, int iterations,
@@ -32,6 +37,9 @@ final class KneeLeastSquares {
         this.j = j;
         this.hcjFloor = hcjFloor;
         this.logX = new double[h.length];
+        this.reduced = new double[h.length];
+        this.logReduced = new double[h.length];
+        this.residuals = new double[h.length];
         for (int i = 0; i < h.length; i++) {
             logX[i] = h[i] < 0 ? Math.log(-h[i]) : Double.NaN;
         }
@@ -63,11 +71,13 @@ final class KneeLeastSquares {
         double lambda = 1e-3;
         double growth = 2;
         double variance = cost / Math.max(1, h.length - n);
+        boolean moved = true;
         int iteration = 0;
         for (; iteration < iterations; iteration++) {
-            if (step(model, normal, gradient, 0).decrease() <= tolerance * variance) {
+            if (moved && step(model, normal, gradient, 0).decrease() <= tolerance * variance) {
                 break;
             }
+            moved = false;
             KneeCurve trial = step(model, normal, gradient, lambda).model();
             double predicted = predictedDecrease(model, trial, normal, gradient);
             clear(trialNormal, trialGradient);
@@ -87,6 +97,7 @@ final class KneeLeastSquares {
                 trialGradient = swapGradient;
                 lambda = Math.max(1e-12, lambda * Math.max(1.0 / 3, 1 - Math.pow(2 * gain - 1, 3)));
                 growth = 2;
+                moved = true;
                 if (converged) {
                     break;
                 }
@@ -225,42 +236,53 @@ final class KneeLeastSquares {
         return true;
     }
 
-    /** Sum of squared residuals of the model; fills JᵀJ and Jᵀr. */
+    /** Sum of squared residuals of the model; fills JᵀJ and Jᵀr (from the Jacobian's columns, one dot product each). */
     private double accumulate(KneeCurve model, double[][] normal, double[] gradient) {
         int n = normal.length;
+        int count = h.length;
+        if (columns.length != n) {
+            columns = new double[n][count];
+        }
         double br = model.remanence();
         double slope = MU0 * (model.linePermeability() - 1);
         double hcj = model.intrinsicCoercivity();
+        double inverseHcj = 1.0 / hcj;
         double logHcj = Math.log(hcj);
-        KneeShape shape = model.shape();
-        double[] shapeDerivatives = new double[n - 2];
-        double[] d = new double[n];
-        double cost = 0;
-        for (int i = 0; i < h.length; i++) {
+        for (int i = 0; i < count; i++) {
+            reduced[i] = -h[i] * inverseHcj;
+            logReduced[i] = logX[i] - logHcj;
+        }
+        // the shape's derivatives land in the columns of t and of its own parameters, then are scaled by the line
+        double[][] shapeColumns = java.util.Arrays.copyOfRange(columns, 2, n);
+        model.shape().fractions(reduced, logReduced, count, columns[0], shapeColumns);
+        double[] f = columns[0];
+        double[] ofLine = columns[1];
+        double[] ofHcj = columns[2];
+        for (int i = 0; i < count; i++) {
             double x = -h[i];
-            double t = x / hcj;
             double line = br - slope * x;
-            double f = shape.fraction(t, logX[i] - logHcj, shapeDerivatives);
-            double r = j[i] - line * f;
-            d[0] = f;
-            d[1] = -MU0 * x * f;
-            d[2] = -line * shapeDerivatives[0] * t / hcj;
+            residuals[i] = j[i] - line * f[i];
+            ofLine[i] = -MU0 * x * f[i];
+            ofHcj[i] = -line * ofHcj[i] * reduced[i] * inverseHcj;
             for (int k = 3; k < n; k++) {
-                d[k] = line * shapeDerivatives[k - 2];
-            }
-            cost += r * r;
-            for (int a = 0; a < n; a++) {
-                gradient[a] += d[a] * r;
-                for (int b = a; b < n; b++) {
-                    normal[a][b] += d[a] * d[b];
-                }
+                columns[k][i] *= line;
             }
         }
         for (int a = 0; a < n; a++) {
-            for (int b = 0; b < a; b++) {
-                normal[a][b] = normal[b][a];
+            gradient[a] = dot(columns[a], residuals, count);
+            for (int b = a; b < n; b++) {
+                normal[a][b] = dot(columns[a], columns[b], count);
+                normal[b][a] = normal[a][b];
             }
         }
-        return cost;
+        return dot(residuals, residuals, count);
+    }
+
+    private static double dot(double[] u, double[] v, int count) {
+        double sum = 0;
+        for (int i = 0; i < count; i++) {
+            sum += u[i] * v[i];
+        }
+        return sum;
     }
 }
