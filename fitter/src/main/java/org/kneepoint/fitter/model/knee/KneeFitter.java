@@ -57,7 +57,8 @@ public final class KneeFitter {
         }
         double hcj = c.hcj() != null ? c.hcj() : 1.05 * -branch.lowestH();
         KneeLeastSquares every = new KneeLeastSquares(data[0], data[1], 1e-3 * hcj);
-        double[][] placed = WellPlacedPoints.of(data[0], data[1], branch, hcj, c.br(), ITERATED_POINTS);
+        double[][] placed = WellPlacedPoints.of(data[0], data[1], branch.monotoneBetween(lowest, branch.highestH()), hcj, c.br(),
+                ITERATED_POINTS);
         KneeLeastSquares iterated = placed[0].length < n ? new KneeLeastSquares(placed[0], placed[1], 1e-3 * hcj) : every;
         double scatter = PointScatter.of(data[0], data[1]);
         KneeLeastSquares.Solution best = null;
