@@ -154,6 +154,18 @@ public final class DemagnetizationBranch {
 
     /** The merged measured points (H, J) with H in {@code [from, to]}, ascending in H, for fits. */
     public double[][] measuredBetween(double from, double to) {
+        int[] range = nodesBetween(from, to);
+        return new double[][] {
+            java.util.Arrays.copyOfRange(h, range[0], range[1]), java.util.Arrays.copyOfRange(measuredJ, range[0], range[1])};
+    }
+
+    /** J of the monotone adjustment (the interpolant's value) at the same points as {@link #measuredBetween}. */
+    public double[] monotoneBetween(double from, double to) {
+        int[] range = nodesBetween(from, to);
+        return java.util.Arrays.copyOfRange(monotoneJ, range[0], range[1]);
+    }
+
+    private int[] nodesBetween(double from, double to) {
         int start = 0;
         while (start < h.length && h[start] < from) {
             start++;
@@ -162,7 +174,6 @@ public final class DemagnetizationBranch {
         while (end < h.length && h[end] <= to) {
             end++;
         }
-        return new double[][] {
-            java.util.Arrays.copyOfRange(h, start, end), java.util.Arrays.copyOfRange(measuredJ, start, end)};
+        return new int[] {start, end};
     }
 }

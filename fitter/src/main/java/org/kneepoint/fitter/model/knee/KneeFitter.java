@@ -27,6 +27,13 @@ public final class KneeFitter {
     static final int ITERATED_POINTS = 64;
     /** Most iterations of the polish on every point, which starts next to its optimum. */
     private static final int POLISH_ITERATIONS = 20;
+    /**
+     * The iterations from each start stop when a further step would move the parameters by less than √(this), 0.1, of
+     * their standard errors on the iterated points; the polish on every point then finishes the fit.
+     */
+    private static final double ITERATED_TOLERANCE = 1e-2;
+    /** The polish stops when a further step would move the parameters by less than √(this), 0.03, of their standard errors. */
+    private static final double POLISH_TOLERANCE = 1e-3;
     /** Skews λ of the switching form tried as starts: ln H (0), H (1) and ever squarer onsets towards an exponential knee. */
     private static final double[] SWITCHING_SKEWS = {0, 1, 3, 10, 30};
     /** atanh(0.9): where −tanh falls to the knee's 0.9. */
@@ -50,7 +57,8 @@ public final class KneeFitter {
         }
         double hcj = c.hcj() != null ? c.hcj() : 1.05 * -branch.lowestH();
         KneeLeastSquares every = new KneeLeastSquares(data[0], data[1], 1e-3 * hcj);
-        double[][] placed = WellPlacedPoints.of(data[0], data[1], branch, hcj, c.br(), ITERATED_POINTS);
+        double[][] placed = WellPlacedPoints.of(data[0], data[1], branch.monotoneBetween(lowest, branch.highestH()), hcj, c.br(),
+                ITERATED_POINTS);
         KneeLeastSquares iterated = placed[0].length < n ? new KneeLeastSquares(placed[0], placed[1], 1e-3 * hcj) : every;
         double scatter = PointScatter.of(data[0], data[1]);
         KneeLeastSquares.Solution best = null;
@@ -58,10 +66,10 @@ public final class KneeFitter {
         NumericalFailureException failure = null;
         for (KneeCurve start : starts(c, hcj, iterated)) {
             try {
-                KneeLeastSquares.Solution solution = iterated.solve(start);
+                KneeLeastSquares.Solution solution = iterated.solve(start, ITERATED_TOLERANCE);
                 evaluations += solution.evaluations() + SWITCHING_SKEWS.length;
                 if (iterated != every) {
-                    solution = every.solve(solution.model(), POLISH_ITERATIONS);
+                    solution = every.solve(solution.model(), POLISH_ITERATIONS, POLISH_TOLERANCE);
                     evaluations += solution.evaluations();
                 }
                 if (best == null || solution.rms() < best.rms()) {
@@ -103,7 +111,7 @@ public final class KneeFitter {
         for (double skew : SWITCHING_SKEWS) {
             double width = skew == 0 ? -Math.log(reduced) / KNEE_ARGUMENT : (1 - Math.pow(reduced, skew)) / (skew * KNEE_ARGUMENT);
             KneeCurve start = new KneeCurve(c.br(), line, hcj, new SwitchingShape(Math.max(SwitchingShape.MIN_WIDTH, width), skew, 0.0));
-            double rms = points.solve(start, 0).rms();
+            double rms = points.solve(start, 0, 0).rms();
             if (switching == null || rms < lowest) {
                 switching = start;
                 lowest = rms;

@@ -20,6 +20,12 @@ public sealed interface KneeShape permits SwitchingShape, RationalShape {
      */
     double fraction(double t, double logT, double[] derivatives);
 
+    /**
+     * As {@link #fraction(double, double, double[])} at the first {@code count} reduced fields at once, with what does
+     * not depend on t worked out once: {@code f[i]}, and {@code derivatives[k][i]} in the order of that method's.
+     */
+    void fractions(double[] t, double[] logT, int count, double[] f, double[][] derivatives);
+
     /** The shape parameters, in a fixed order. */
     double[] parameters();
 

@@ -14,13 +14,24 @@ final class ModelEnergyProduct {
     static double maximum(KneeCurve model) {
         double left = model.operatingField(0.0, 0.0);
         double right = 0.0;
-        for (int i = 0; i < 200 && right - left > 1e-10 * -model.operatingField(0.0, 0.0); i++) {
-            double a = right - GOLDEN * (right - left);
-            double b = left + GOLDEN * (right - left);
-            if (product(model, a) >= product(model, b)) {
+        double tolerance = 1e-10 * -left;
+        double a = right - GOLDEN * (right - left);
+        double b = left + GOLDEN * (right - left);
+        double atA = product(model, a);
+        double atB = product(model, b);
+        for (int i = 0; i < 200 && right - left > tolerance; i++) {
+            if (atA >= atB) {
                 right = b;
+                b = a;
+                atB = atA;
+                a = right - GOLDEN * (right - left);
+                atA = product(model, a);
             } else {
                 left = a;
+                a = b;
+                atA = atB;
+                b = left + GOLDEN * (right - left);
+                atB = product(model, b);
             }
         }
         return product(model, 0.5 * (left + right));

@@ -26,6 +26,17 @@ public record RationalShape(double bend, double curvature) implements KneeShape 
     }
 
     @Override
+    public void fractions(double[] t, double[] logT, int count, double[] f, double[][] d) {
+        double[] point = new double[3];
+        for (int i = 0; i < count; i++) {
+            f[i] = fraction(t[i], logT[i], point);
+            for (int k = 0; k < 3; k++) {
+                d[k][i] = point[k];
+            }
+        }
+    }
+
+    @Override
     public double fraction(double t, double logT, double[] d) {
         if (t < 0) {
             double slope = -1.0 + bend - curvature;

@@ -9,7 +9,7 @@ final class SmallLinearSystem {
     private SmallLinearSystem() {
     }
 
-    /** Solves (A + λ·diag(A))·x = b (Marquardt's damping). */
+    /** Solves (A + λ·diag(A))·x = b (Marquardt's damping); null when the matrix is singular. */
     static double[] solveDamped(double[][] a, double[] b, double lambda) {
         int n = b.length;
         double[][] m = new double[n][n + 1];
@@ -19,7 +19,7 @@ final class SmallLinearSystem {
             m[i][n] = b[i];
         }
         if (!eliminate(m, n, n + 1)) {
-            return new double[n];
+            return null;
         }
         double[] x = new double[n];
         for (int i = 0; i < n; i++) {

@@ -32,7 +32,45 @@ public record SwitchingShape(double width, double skew, double tail) implements 
 
     @Override
     public double fraction(double t, double logT, double[] d) {
-        double z0 = skew > 0 ? -1.0 / (skew * width) : Double.NEGATIVE_INFINITY;
+        return fraction(t, logT, d, origin());
+    }
+
+    @Override
+    public void fractions(double[] t, double[] logT, int count, double[] f, double[][] d) {
+        Origin origin = origin();
+        double[] point = new double[4];
+        for (int i = 0; i < count; i++) {
+            f[i] = fraction(t[i], logT[i], point, origin);
+            for (int k = 0; k < 4; k++) {
+                d[k][i] = point[k];
+            }
+        }
+    }
+
+    /**
+     * What does not depend on t: G(z₀) and the derivatives of y₀ = z₀ + c·z₀³ by σ, λ and c, each weighted by
+     * G'(z₀)/G(z₀)² (zero where G is flat at z₀ or z₀ = −∞).
+     */
+    private record Origin(double g0, double width, double skew, double tail) {
+    }
+
+    private Origin origin() {
+        if (!(skew > 0)) {
+            return new Origin(1.0, 0.0, 0.0, 0.0);
+        }
+        double z0 = -1.0 / (skew * width);
+        double g0 = -tanh(z0 + tail * z0 * z0 * z0);
+        double slope0 = -(1.0 - g0 * g0);
+        if (slope0 == 0.0) {
+            return new Origin(g0, 0.0, 0.0, 0.0);
+        }
+        double weight = slope0 / (g0 * g0);
+        double dy0Dz0 = 1.0 + 3.0 * tail * z0 * z0;
+        return new Origin(g0, weight * dy0Dz0 * (-z0 / width), weight * dy0Dz0 / (skew * skew * width), weight * z0 * z0 * z0);
+    }
+
+    /** f at t, and in d ∂f/∂t, ∂f/∂σ, ∂f/∂λ, ∂f/∂c (when d is not null). */
+    private double fraction(double t, double logT, double[] d, Origin origin) {
         if (!(t > 0)) {
             if (d != null) {
                 java.util.Arrays.fill(d, 0, 4, 0.0);
@@ -53,35 +91,14 @@ public record SwitchingShape(double width, double skew, double tail) implements 
         }
         double y = z + tail * z * z * z;
         double g = -tanh(y);
-        double slope = -(1.0 - g * g);
-        double g0 = 1.0;
-        double slope0 = 0.0;
-        double y0 = Double.NEGATIVE_INFINITY;
-        if (skew > 0) {
-            y0 = z0 + tail * z0 * z0 * z0;
-            g0 = -tanh(y0);
-            slope0 = -(1.0 - g0 * g0);
-        }
-        double f = g / g0;
+        double f = g / origin.g0();
         if (d != null) {
+            double slope = -(1.0 - g * g) / origin.g0();
             double dyDz = 1.0 + 3.0 * tail * z * z;
-            d[0] = slope * dyDz * power / (t * width) / g0;
-            double dyWidth = dyDz * (-z / width);
-            double dySkew = dyDz * zSkew;
-            double dyTail = z * z * z;
-            double dy0Width = 0.0;
-            double dy0Skew = 0.0;
-            double dy0Tail = 0.0;
-            if (skew > 0 && slope0 != 0.0) {
-                double dy0Dz0 = 1.0 + 3.0 * tail * z0 * z0;
-                dy0Width = dy0Dz0 * (-z0 / width);
-                dy0Skew = dy0Dz0 / (skew * skew * width);
-                dy0Tail = z0 * z0 * z0;
-            }
-            double ratio = slope0 == 0.0 ? 0.0 : g * slope0 / (g0 * g0);
-            d[1] = slope * dyWidth / g0 - ratio * dy0Width;
-            d[2] = slope * dySkew / g0 - ratio * dy0Skew;
-            d[3] = slope * dyTail / g0 - ratio * dy0Tail;
+            d[0] = slope * dyDz * power / (t * width);
+            d[1] = slope * dyDz * (-z / width) - g * origin.width();
+            d[2] = slope * dyDz * zSkew - g * origin.skew();
+            d[3] = slope * z * z * z - g * origin.tail();
         }
         return f;
     }

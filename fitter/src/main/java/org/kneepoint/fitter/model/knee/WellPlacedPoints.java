@@ -1,7 +1,6 @@
 package org.kneepoint.fitter.model.knee;
 
 import java.util.Arrays;
-import org.kneepoint.fitter.curve.DemagnetizationBranch;
 
 /**
  * A fixed number of well-placed points of a dense curve, for the knee fit's iterations: the measured points nearest to
@@ -15,18 +14,20 @@ final class WellPlacedPoints {
     private WellPlacedPoints() {
     }
 
-    /** Up to {@code count} of the points (h ascending), as {h, j}; all of them when there are no more than that. */
-    static double[][] of(double[] h, double[] j, DemagnetizationBranch branch, double hcj, double br, int count) {
+    /**
+     * Up to {@code count} of the points (h ascending), as {h, j}; all of them when there are no more than that.
+     * {@code smooth} holds the interpolant's J at the same points.
+     */
+    static double[][] of(double[] h, double[] j, double[] smooth, double hcj, double br, int count) {
         int n = h.length;
         if (n <= count) {
             return new double[][] {h, j};
         }
         double[] length = new double[n];
-        double previous = branch.j(h[0]) / br;
         for (int i = 1; i < n; i++) {
-            double y = branch.j(h[i]) / br;
-            length[i] = length[i - 1] + Math.hypot((h[i] - h[i - 1]) / hcj, y - previous);
-            previous = y;
+            double dx = (h[i] - h[i - 1]) / hcj;
+            double dy = (smooth[i] - smooth[i - 1]) / br;
+            length[i] = length[i - 1] + Math.sqrt(dx * dx + dy * dy);
         }
         int[] picked = new int[count];
         int size = 0;
