@@ -129,9 +129,13 @@ public final class Verdicts {
                 + " more reasons)"), reasons);
     }
 
-    /** "41.9 % loss against 1 %" when the loss is among the shortfalls, else null. */
+    /**
+     * "41.9 % loss against 1 %" when the loss is among the shortfalls, else null; null too for a material that is not a
+     * permanent magnet, whose summary says that first.
+     */
     private static String lossAgainst(List<Shortfall> shortfalls, double loss, double limit, String where) {
-        boolean over = shortfalls.stream().anyMatch(shortfall -> shortfall.requirement() == Shortfall.Requirement.MAXIMUM_IRREVERSIBLE_LOSS);
+        boolean over = shortfalls.stream().anyMatch(shortfall -> shortfall.requirement() == Shortfall.Requirement.MAXIMUM_IRREVERSIBLE_LOSS)
+                && shortfalls.stream().noneMatch(shortfall -> shortfall.requirement() == Shortfall.Requirement.PERMANENT_MAGNET);
         return over ? EngineeringUnits.percent(loss) + " loss" + where + " against " + EngineeringUnits.percent(limit) : null;
     }
 
@@ -175,7 +179,7 @@ public final class Verdicts {
                     default -> new ShortfallWording(worstAt.get(requirement), Double.NaN, Double.NaN, lossLimit, null, null, null)
                             .words(new Shortfall(requirement, by));
                 };
-                if (requirement == Shortfall.Requirement.MAXIMUM_IRREVERSIBLE_LOSS) {
+                if (requirement == Shortfall.Requirement.MAXIMUM_IRREVERSIBLE_LOSS && !where.containsKey(Shortfall.Requirement.PERMANENT_MAGNET)) {
                     loss = EngineeringUnits.percent(lossLimit + by) + " loss " + worstLoss + " against " + EngineeringUnits.percent(lossLimit);
                 }
                 reasons.add(requirement == Shortfall.Requirement.PERMANENT_MAGNET ? text : text + " " + places(entry.getValue()));
