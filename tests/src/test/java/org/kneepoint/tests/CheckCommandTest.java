@@ -38,7 +38,7 @@ class CheckCommandTest {
                 "maxWorkingTemperatureK", "extrapolated", "cautions", "kneeField", "kneeMarginTemperatureK",
                 "maxWorkingTemperatureStop", "lossLimitPercent", "localCheck", "fieldConvention", "opposingFieldH", "externalFieldH",
                 "demagnetizingFactor", "minWorkingTemperatureK", "minWorkingTemperatureStop", "operatingPointExtrapolated",
-                "lossExtrapolated", "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField");
+                "lossExtrapolated", "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField", "verdict");
         assertEquals(keys, iterable(json));
         assertTrue(json.get("localCheck").isNull(), "a load line given by its Pc has no shape to check locally");
         assertEquals("loss-limit", json.get("maxWorkingTemperatureStop").asText());

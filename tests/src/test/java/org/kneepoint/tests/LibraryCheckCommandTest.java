@@ -51,7 +51,7 @@ class LibraryCheckCommandTest {
                 "maxWorkingTemperatureK", "extrapolated", "cautions", "kneeField", "kneeMarginTemperatureK", "maxWorkingTemperatureStop",
                 "lossLimitPercent", "localCheck", "fieldConvention", "opposingFieldH", "externalFieldH",
                 "demagnetizingFactor", "minWorkingTemperatureK", "minWorkingTemperatureStop", "operatingPointExtrapolated",
-                "lossExtrapolated", "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField"), keys);
+                "lossExtrapolated", "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField", "verdict"), keys);
         assertFalse(json.get("extrapolated").asBoolean());
         assertTrue(json.get("maxWorkingTemperatureK").asDouble() < 373.15, json.toString());
         assertEquals(3, json.get("cautions").size());

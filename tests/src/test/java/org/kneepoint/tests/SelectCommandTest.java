@@ -54,7 +54,7 @@ class SelectCommandTest {
             row.fieldNames().forEachRemaining(keys::add);
             assertEquals(List.of("grade", "family", "assessable", "pass", "reasons", "fluxDensity", "kneeMarginH",
                     "irreversibleLossPercent", "maxWorkingTemperatureK", "extrapolated", "price", "fieldConvention", "minWorkingTemperatureK",
-                    "beyondMeasuredField"), keys);
+                    "beyondMeasuredField", "verdict"), keys);
             assertTrue(row.get("reasons").isArray());
             assertEquals(row.get("pass").asBoolean(), row.get("reasons").isEmpty(), row.toString());
         }

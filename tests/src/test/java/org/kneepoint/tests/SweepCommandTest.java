@@ -35,7 +35,7 @@ class SweepCommandTest {
         List<String> keys = new ArrayList<>();
         sweep.fieldNames().forEachRemaining(keys::add);
         assertEquals(List.of("pc", "fieldConvention", "opposingFieldH", "externalFieldH", "lossLimitPercent", "steps",
-                "minWorkingTemperatureK", "maxWorkingTemperatureK", "extrapolated", "beyondMeasuredField", "cautions"), keys);
+                "minWorkingTemperatureK", "maxWorkingTemperatureK", "extrapolated", "beyondMeasuredField", "cautions", "verdict"), keys);
         assertEquals(17, sweep.get("steps").size());
         JsonNode at120 = sweep.get("steps").get(10);
         assertEquals(393.15, at120.get("temperatureK").asDouble(), 1e-9);

@@ -187,6 +187,8 @@ class WebPagesTest {
         assertTrue(html.contains("Caution.") && html.contains("implanted medical devices"));
         assertEquals(check.get("extrapolated").asBoolean(), html.contains("extrapolated beyond the measured temperatures"));
         assertTrue(html.contains("<img src=\"/charts/check.svg" + query.replace("&", "&amp;") + "\""));
+        assertTrue(html.contains("<strong>Verdict:</strong> " + check.get("verdict").get("summary").asText()), html);
+        assertTrue(html.indexOf("Verdict:") < html.indexOf("class=\"results\""), "the verdict comes before the numbers");
     }
 
     @Test
@@ -221,8 +223,10 @@ class WebPagesTest {
         String html = page("/select?pc=2&temperature=100C&minFluxDensity=0.5T&maxLoss=2%25");
         JsonNode ranked = RunningServer.json(server.get("/api/select?pc=2&temperature=100C&minFluxDensity=0.5T&maxLoss=2%25"));
         String first = ranked.get(0).get("grade").asText();
-        assertTrue(html.contains(">pass<") && html.contains(">fail<") && html.contains(">n/a<"));
-        assertTrue(html.indexOf(">" + first + "<") < html.indexOf(">fail<"), html);
+        assertTrue(html.contains(">meets<") && html.contains(">falls short<") && html.contains(">not assessed<"), html);
+        assertFalse(html.contains(">pass<") || html.contains(">fail<"), "words of our own, not pass/fail");
+        assertTrue(html.indexOf(">" + first + "<") < html.indexOf(">falls short<"), html);
+        assertTrue(html.contains("<strong>Verdict:</strong> meets the requirements:"), html);
         assertTrue(html.contains("is below the minimum") || html.contains("exceeds the maximum"));
         assertTrue(html.contains(ESCAPED) && !html.contains(SCRIPT));
         assertTrue(html.contains("not assessable"));

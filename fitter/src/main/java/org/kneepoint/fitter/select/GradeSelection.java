@@ -8,8 +8,10 @@ import org.kneepoint.fitter.loadline.TemperatureModel;
 
 /**
  * Ranks grades against requirements (docs/design.md §2, workflow 4): each grade's design check at the required
- * temperature on the required load line (loss by the recoil line through the operating point), its shortfalls (flux density below the minimum, loss above
- * the maximum, temperature outside the grade's model), and the ranked list.
+ * temperature on the required load line (loss by the recoil line through the operating point), its shortfalls
+ * ({@link DesignShortfalls}: not a permanent magnet, flux density below the minimum or not above zero, loss above the
+ * maximum, the point below the knee, the temperature outside the working range; or outside the grade's model), and
+ * the ranked list. A grade with any shortfall never passes.
  */
 public final class GradeSelection {
 
@@ -37,15 +39,8 @@ public final class GradeSelection {
         }
         DesignCheckResult check = DesignCheck.of(model, requirements.loadLine().pc(), requirements.field(), temperature,
                 requirements.maximumIrreversibleLoss());
-        List<Shortfall> shortfalls = new ArrayList<>(2);
+        List<Shortfall> shortfalls = DesignShortfalls.of(check, model.at(temperature), requirements.minimumFluxDensity());
         double flux = check.point().b();
-        if (requirements.minimumFluxDensity() != null && flux < requirements.minimumFluxDensity()) {
-            shortfalls.add(new Shortfall(Shortfall.Requirement.MINIMUM_FLUX_DENSITY, requirements.minimumFluxDensity() - flux));
-        }
-        if (check.irreversibleLoss() > requirements.maximumIrreversibleLoss()) {
-            shortfalls.add(new Shortfall(Shortfall.Requirement.MAXIMUM_IRREVERSIBLE_LOSS,
-                    check.irreversibleLoss() - requirements.maximumIrreversibleLoss()));
-        }
         double kneeMargin = check.kneeMarginField() == null ? Double.NaN : check.kneeMarginField();
         return new RankedGrade(candidate.name(), shortfalls, flux, kneeMargin, check.irreversibleLoss(),
                 check.maxWorkingTemperature(), candidate.price(), check.working().minimum().temperature(),

@@ -11,12 +11,13 @@ import org.kneepoint.fitter.temperature.TemperatureCurve;
  * HcJ of an intrinsic curve as a positive number (A/m): the curve's own where it knows it (a measured curve's
  * characterized HcJ, a model's parameter), else the field where J falls to 0 by a bracketing Brent search.
  */
-final class IntrinsicCoercivity {
+public final class IntrinsicCoercivity {
 
     private IntrinsicCoercivity() {
     }
 
-    static double of(IntrinsicCurve curve) {
+    /** HcJ of {@code curve}, A/m, positive; a curve that never falls to J = 0 is a numerical failure. */
+    public static double of(IntrinsicCurve curve) {
         if (curve instanceof TemperatureCurve measured) {
             return measured.intrinsicCoercivity();
         }

@@ -82,6 +82,9 @@ final class CheckCommand implements Callable<Integer> {
     @Mixin
     private OutputOptions output;
 
+    @Mixin
+    private ShortfallOption shortfall;
+
     @Option(names = "--report", paramLabel = "FILE.html",
             description = "Also write a self-contained HTML report (inputs, results, chart, assumptions, sources, cautions).")
     private Path report;
@@ -100,6 +103,6 @@ final class CheckCommand implements Callable<Integer> {
             OutputFile.write(report, CheckReport.html(run, "kneepoint " + inputs, VersionInfo.version()));
         }
         output.print(spec.commandLine().getOut(), run::document, () -> CheckView.table(run) + ToleranceView.table(run));
-        return 0;
+        return shortfall.exitCode(run.verdict());
     }
 }

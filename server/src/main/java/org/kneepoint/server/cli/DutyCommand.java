@@ -43,14 +43,21 @@ final class DutyCommand implements Callable<Integer> {
                     + " magnet, H = −Hext − N·M, N = 1/(1 + Pc)).")
     private DutyStepsConverter.Steps steps;
 
+    @Option(names = "--loss-limit", converter = QuantityConverters.Percent.class, defaultValue = "1%",
+            description = "Irreversible loss allowed after the sequence, which its verdict holds it to (default: ${DEFAULT-VALUE}).")
+    private double lossLimitPercent;
+
     @Mixin
     private OutputOptions output;
 
+    @Mixin
+    private ShortfallOption shortfall;
+
     @Override
     public Integer call() {
-        DutyRun run = DesignChecks.duty(new DutyRequest(grade.choice(gradeName), loadLine.spec(), steps.list()),
-                name -> GradeOptions.stored(name, libraryOption));
+        DutyRun run = DesignChecks.duty(new DutyRequest(grade.choice(gradeName), loadLine.spec(), steps.list(),
+                lossLimitPercent / 100.0), name -> GradeOptions.stored(name, libraryOption));
         output.print(spec.commandLine().getOut(), run::document, () -> DutyView.table(run));
-        return 0;
+        return shortfall.exitCode(run.verdict());
     }
 }

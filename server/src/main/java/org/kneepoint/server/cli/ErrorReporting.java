@@ -11,7 +11,8 @@ import picocli.CommandLine;
  * value that failed its checksum); 3 a computation that failed numerically; 4 the library's database
  * cannot be reached, another program holds it, its folder or file is read-only or its disk is full
  * (nothing was written; run the command again when the cause is gone); 1 an internal error (a
- * bug: set {@code KNEEPOINT_DEBUG=1} to see its stack trace).
+ * bug: set {@code KNEEPOINT_DEBUG=1} to see its stack trace); 5 a result that falls short of what was asked, only with
+ * {@code --fail-on-shortfall} ({@link ShortfallOption}; the result is printed all the same).
  */
 public final class ErrorReporting {
 
@@ -19,6 +20,7 @@ public final class ErrorReporting {
     public static final int NUMERICAL_FAILURE = 3;
     public static final int INTERNAL_ERROR = 1;
     public static final int UNAVAILABLE = 4;
+    public static final int SHORTFALL = 5;
 
     private ErrorReporting() {
     }

@@ -55,6 +55,9 @@ final class SelectCommand implements Callable<Integer> {
     private OutputOptions output;
 
     @Mixin
+    private ShortfallOption shortfall;
+
+    @Mixin
     private LibraryOption libraryOption;
 
     @Override
@@ -66,6 +69,6 @@ final class SelectCommand implements Callable<Integer> {
             run = DesignChecks.select(request, library.reader());
         }
         output.print(spec.commandLine().getOut(), run::document, () -> SelectionView.table(run));
-        return 0;
+        return shortfall.exitCode(run.verdict());
     }
 }

@@ -69,6 +69,9 @@ final class SweepCommand implements Callable<Integer> {
     @Mixin
     private OutputOptions output;
 
+    @Mixin
+    private ShortfallOption shortfall;
+
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Also write FILE.svg or FILE.png (the chart) or FILE.csv (the table).")
     private Path file;
 
@@ -86,7 +89,7 @@ final class SweepCommand implements Callable<Integer> {
             }
         }
         output.print(spec.commandLine().getOut(), run::document, () -> SweepView.table(run));
-        return 0;
+        return shortfall.exitCode(run.verdict());
     }
 
     private static String kind(Path file) {

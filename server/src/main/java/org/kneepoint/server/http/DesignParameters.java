@@ -69,6 +69,7 @@ final class DesignParameters {
         }
         all.add(ApiParameter.query("steps", true, "the steps TEMPERATURE:FIELD[:external] separated by commas; a field is in the circuit"
                 + " convention unless marked external", "20C:0, 150C:300kA/m, 120C:200kA/m:external"));
+        all.add(ApiParameter.query("lossLimit", false, "irreversible loss allowed after the sequence, for its verdict (default 1%)", "1%"));
         return all.toArray(ApiParameter[]::new);
     }
 

@@ -86,11 +86,12 @@ public final class DesignRequests {
         return DesignChecks.sweep(request, name -> models.stored(reader, name));
     }
 
-    /** The duty sequence the query asks for: {@code grade} or the typed-in grade, the load line, {@code steps}. */
+    /** The duty sequence the query asks for: {@code grade} or the typed-in grade, the load line, {@code steps}, {@code lossLimit}. */
     public static DutyRun duty(Context context, LibraryReader reader, GradeModelCache models) {
         Query query = new Query(context);
         LoadLineSpec loadLine = loadLine(query);
-        DutyRequest request = new DutyRequest(grade(query), loadLine, DutySteps.parse(query.text("steps")));
+        DutyRequest request = new DutyRequest(grade(query), loadLine, DutySteps.parse(query.text("steps")),
+                percent(query, "lossLimit", 1.0) / 100.0);
         return DesignChecks.duty(request, name -> models.stored(reader, name));
     }
 

@@ -28,6 +28,7 @@ public final class CheckView {
         StringBuilder out = new StringBuilder();
         out.append("Design check at ").append(EngineeringUnits.celsius(result.temperature())).append(", ").append(loadLine)
                 .append(", Pc = ").append(EngineeringUnits.number(result.loadLine().pc())).append('\n');
+        out.append(VerdictView.lines(run.verdict()));
         row(out, "grade", model);
         if (extrapolated) {
             row(out, "extrapolated", "yes: T, T0 or a working temperature lies outside the measured temperatures");

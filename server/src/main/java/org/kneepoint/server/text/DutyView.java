@@ -21,7 +21,8 @@ public final class DutyView {
         double pc = run.pc();
         boolean extrapolated = run.extrapolated();
         StringBuilder out = new StringBuilder("Duty sequence, ").append(loadLine).append(", Pc = ")
-                .append(EngineeringUnits.number(pc)).append('\n').append("  grade: ").append(model).append('\n');
+                .append(EngineeringUnits.number(pc)).append('\n').append(VerdictView.lines(run.verdict()))
+                .append("  grade: ").append(model).append('\n');
         String format = "  %-5s %-12s %-16s %-14s %-12s %-14s %s%n";
         out.append(String.format(format, "step", "temperature", "opposing field", "H", "B", "loss this step", "loss so far"));
         int number = 1;

@@ -35,28 +35,31 @@ public final class SelectionView {
         out.append("  requires: B at least ").append(requirements.minimumFluxDensity() == null ? "(any)"
                 : EngineeringUnits.tesla(requirements.minimumFluxDensity())).append(", irreversible loss at most ")
                 .append(EngineeringUnits.percent(requirements.maximumIrreversibleLoss())).append('\n');
+        out.append(run.verdict().passes() ? VerdictView.lines(run.verdict()) : "  Verdict: " + PlainText.printable(run.verdict().summary())
+                + " (each grade's reasons are in its row)\n");
         if (rows.isEmpty()) {
             out.append("  No grades in the library to select from.\n");
         }
-        String format = "  %-24s %-16s %-6s %-11s %-14s %-10s %-12s %-9s %-5s %s%n";
-        out.append(String.format(format, "grade", "family", "result", "B", "knee margin", "irr. loss", "max temp.", "price/kg", "extr.",
+        String format = "  %-24s %-16s %-12s %-11s %-14s %-10s %-16s %-9s %-5s %s%n";
+        out.append(String.format(format, "grade", "family", "verdict", "B", "knee margin", "irr. loss", "max temp.", "price/kg", "extr.",
                 "reasons"));
         boolean anyExtrapolated = false;
         for (SelectionRow row : rows) {
             anyExtrapolated |= row.extrapolated();
             RankedGrade ranked = row.ranked();
             out.append(String.format(format, PlainText.printable(row.grade()), PlainText.printable(row.family()),
-                    !row.assessable() ? "n/a" : row.passes() ? "pass" : "fail",
+                    !row.assessable() ? "not assessed" : row.passes() ? "meets" : "falls short",
                     ranked == null ? "-" : value(ranked.fluxDensity(), EngineeringUnits.tesla(ranked.fluxDensity())),
                     ranked == null ? "-" : value(ranked.kneeMarginField(), EngineeringUnits.field(ranked.kneeMarginField())),
                     ranked == null ? "-" : value(ranked.irreversibleLoss(), EngineeringUnits.percent(ranked.irreversibleLoss())),
-                    ranked == null || !Double.isFinite(ranked.fluxDensity()) ? "-" : ranked.maxWorkingTemperature() == null ? "none"
-                            : EngineeringUnits.celsius(ranked.maxWorkingTemperature()),
+                    ranked == null || !Double.isFinite(ranked.fluxDensity()) ? "-" : ranked.maxWorkingTemperature() == null
+                            ? "none in range" : EngineeringUnits.celsius(ranked.maxWorkingTemperature()),
                     ranked == null || ranked.price() == null ? "-" : String.format(java.util.Locale.ROOT, "%.2f", ranked.price()),
                     row.extrapolated() ? "yes" : "no", PlainText.printable(String.join("; ", SelectionDocument.reasons(row, requirements)))));
         }
-        out.append("  Passing grades first, each group sorted by ").append(sortedBy)
-                .append("; \"extr.\" marks a temperature model used outside its measured temperatures.\n");
+        out.append("  Grades that meet every requirement first, each group sorted by ").append(sortedBy)
+                .append("; \"extr.\" marks a temperature model used outside its measured temperatures; \"none in range\" as the"
+                        + " max. temp.: no temperature of the grade's model keeps the loss within the limit (it is not \"no limit\").\n");
         List<String> beyond = rows.stream().filter(row -> row.assessable() && row.ranked().beyondMeasuredField())
                 .map(row -> PlainText.printable(row.grade())).toList();
         if (!beyond.isEmpty()) {

@@ -20,7 +20,7 @@ public final class SweepView {
     public static String table(SweepRun run) {
         StringBuilder out = new StringBuilder();
         out.append("Temperature sweep, ").append(run.loadLine().describe()).append(", Pc = ").append(EngineeringUnits.number(run.pc()))
-                .append('\n').append(String.format(Locale.ROOT, "  grade %s%n", run.model().description()));
+                .append('\n').append(VerdictView.lines(run.verdict())).append(String.format(Locale.ROOT, "  grade %s%n", run.model().description()));
         out.append(String.format(Locale.ROOT, "  %10s %12s %8s %8s %12s %12s %14s%n", "T", "H (kA/m)", "B (T)", "J (T)",
                 "reversible", "irreversible", "knee margin"));
         for (SweepPoint point : run.sweep().points()) {
@@ -33,8 +33,8 @@ public final class SweepView {
         Double minimum = run.sweep().working().minimum().temperature();
         Double maximum = run.sweep().working().maximum().temperature();
         out.append(String.format(Locale.ROOT, "  working temperatures for a loss limit of %s: %s to %s%n",
-                EngineeringUnits.percent(run.lossLimit()), minimum == null ? "none" : EngineeringUnits.celsius(minimum),
-                maximum == null ? "none" : EngineeringUnits.celsius(maximum)));
+                EngineeringUnits.percent(run.lossLimit()), minimum == null ? "not found in the model's range" : EngineeringUnits.celsius(minimum),
+                maximum == null ? "not found in the model's range" : EngineeringUnits.celsius(maximum)));
         return out.append(Cautions.table(run.extrapolated(), run.beyondMeasuredField())).toString();
     }
 

@@ -6,6 +6,7 @@ import java.util.function.UnaryOperator;
 import org.kneepoint.db.LibraryReader;
 import org.kneepoint.fitter.library.GradeSummary;
 import org.kneepoint.server.app.design.CheckRun;
+import org.kneepoint.server.app.design.Verdict;
 import org.kneepoint.server.app.wording.Temperatures;
 
 /**
@@ -24,8 +25,9 @@ final class CheckPage {
             FormFields.LoadLine loadLine, List<FormFields.TextField> duty, Results results) {
     }
 
-    /** A check's results: the temperature, the model and load line in words, the numbers, the chart's link. */
-    record Results(String temperature, String model, String loadLine, List<CheckResults.Row> rows, String chart, boolean extrapolated) {
+    /** A check's results: the temperature, the model and load line in words, the numbers, the chart's link, the verdict. */
+    record Results(String temperature, String model, String loadLine, List<CheckResults.Row> rows, String chart, boolean extrapolated,
+            Verdict verdict) {
     }
 
     static String render(LibraryReader library, UnaryOperator<String> values, String query, CheckRun run, String problem,
@@ -44,7 +46,7 @@ final class CheckPage {
                 FormFields.text(values, "externalField", "or external field (free magnet)", "300kA/m"),
                 FormFields.text(values, "lossLimit", "loss limit", "1%"));
         Results results = run == null ? null : new Results(Temperatures.celsius(run.result().temperature()), run.model().description(),
-                run.loadLine().describe(), CheckResults.rows(run), "/charts/check.svg?" + query, run.extrapolated());
+                run.loadLine().describe(), CheckResults.rows(run), "/charts/check.svg?" + query, run.extrapolated(), run.verdict());
         View view = new View(new Layout.Frame("Check", "Check", demoPresent), problem, FormFields.choice(values, "grade", "grade", grades),
                 typed, FormFields.loadLine(values), duty, results);
         return Templates.render("check.jte", view);

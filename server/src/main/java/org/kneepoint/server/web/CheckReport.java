@@ -9,10 +9,11 @@ import java.util.List;
 import org.kneepoint.fitter.loadline.LoadLine;
 import org.kneepoint.server.chart.CheckChart;
 import org.kneepoint.server.app.design.CheckRun;
+import org.kneepoint.server.app.design.Verdict;
 import org.kneepoint.server.app.wording.Temperatures;
 
 /**
- * A design check as one self-contained HTML file for a design review: the inputs, the results, the
+ * A design check as one self-contained HTML file for a design review: the inputs, the verdict, the results, the
  * operating-point chart (inline SVG), the assumptions, the published source of each method and the
  * cautions. It needs nothing else to open offline: the style sheet is inlined and there is no script.
  */
@@ -44,7 +45,7 @@ public final class CheckReport {
     /** The report's contents; {@code chart} is SVG markup from the chart library and {@code styleSheet} our own CSS. */
     record View(String version, String madeAt, String inputs, String model, String loadLine, String temperature,
             List<CheckResults.Row> results, String chart, List<String> assumptions, List<String> sources, boolean extrapolated,
-            String styleSheet) {
+            String styleSheet, Verdict verdict) {
     }
 
     /** The report of a check, from the command line that asked for it, by this version of the program. */
@@ -54,7 +55,8 @@ public final class CheckReport {
         String chart = CheckChart.svg("Operating point at " + temperature, run.model().model(), CheckChart.temperaturesOf(
                 run.model().model(), run.result().temperature(), run.result().maxWorkingTemperature()), line, 960, 560);
         return Templates.render("report.jte", new View(programVersion, Instant.now().toString(), inputs, run.model().description(),
-                run.loadLine().describe(), temperature, CheckResults.rows(run), chart, ASSUMPTIONS, SOURCES, run.extrapolated(), styleSheet()));
+                run.loadLine().describe(), temperature, CheckResults.rows(run), chart, ASSUMPTIONS, SOURCES, run.extrapolated(), styleSheet(),
+                run.verdict()));
     }
 
     private static String styleSheet() {

@@ -9,6 +9,7 @@ import org.kneepoint.server.app.design.SelectionRun;
 import org.kneepoint.server.app.design.SelectionRow;
 import org.kneepoint.server.app.design.SelectionSort;
 import org.kneepoint.server.app.design.SelectionDocument;
+import org.kneepoint.server.app.design.Verdict;
 import org.kneepoint.server.app.wording.Temperatures;
 
 /**
@@ -19,6 +20,9 @@ import org.kneepoint.server.app.wording.Temperatures;
  */
 final class SelectPage {
 
+    private static final String MEETS = "meets";
+    private static final String NOT_ASSESSED = "not assessed";
+
     private SelectPage() {
     }
 
@@ -27,17 +31,17 @@ final class SelectPage {
             FormFields.Choice family, FormFields.Choice order, Ranking ranking) {
     }
 
-    /** The ranking: its temperature and Pc, a row per grade, the order in words, whether any row is extrapolated. */
-    record Ranking(String temperature, String pc, List<Row> rows, String order, boolean extrapolated) {
+    /** The ranking: its temperature and Pc, a row per grade, the order in words, whether any row is extrapolated, the verdict. */
+    record Ranking(String temperature, String pc, List<Row> rows, String order, boolean extrapolated, Verdict verdict) {
     }
 
-    /** One grade's row; {@code result} is pass, fail or n/a, and "—" stands where the grade gives no value. */
+    /** One grade's row; {@code result} is "meets", "falls short" or "not assessed", and "—" stands where the grade gives no value. */
     record Row(Links.Link grade, String family, String result, String flux, String kneeMargin, String loss, String maximum,
             String price, boolean extrapolated, String reasons) {
 
-        /** The row's class: its result, or "unassessed". */
+        /** The row's class: "meets", "short" or "unassessed". */
         String rowClass() {
-            return result.equals("n/a") ? "unassessed" : result;
+            return result.equals(NOT_ASSESSED) ? "unassessed" : result.equals(MEETS) ? "meets" : "short";
         }
     }
 
@@ -61,12 +65,12 @@ final class SelectPage {
     private static Ranking ranking(SelectionRun run) {
         List<Row> rows = run.rows().stream().map(row -> row(row, run)).toList();
         return new Ranking(Temperatures.celsius(run.requirements().temperature()), CheckResults.format("%.4g", run.requirements().loadLine().pc()),
-                rows, SelectionSort.describe(run.order()), rows.stream().anyMatch(Row::extrapolated));
+                rows, SelectionSort.describe(run.order()), rows.stream().anyMatch(Row::extrapolated), run.verdict());
     }
 
     private static Row row(SelectionRow row, SelectionRun run) {
         RankedGrade ranked = row.ranked();
-        String result = !row.assessable() ? "n/a" : row.passes() ? "pass" : "fail";
+        String result = !row.assessable() ? NOT_ASSESSED : row.passes() ? MEETS : "falls short";
         return new Row(Links.Link.toGrade(row.grade()), row.family(), result,
                 number(ranked == null ? Double.NaN : ranked.fluxDensity(), "%.4f", 1),
                 number(ranked == null ? Double.NaN : ranked.kneeMarginField(), "%.1f", 1000),
@@ -79,7 +83,7 @@ final class SelectPage {
         if (ranked == null || !Double.isFinite(ranked.fluxDensity())) {
             return "—";
         }
-        return ranked.maxWorkingTemperature() == null ? "none" : Temperatures.celsius(ranked.maxWorkingTemperature());
+        return ranked.maxWorkingTemperature() == null ? "none in range" : Temperatures.celsius(ranked.maxWorkingTemperature());
     }
 
     private static String number(double value, String pattern, double divisor) {

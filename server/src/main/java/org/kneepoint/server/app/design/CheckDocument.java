@@ -44,6 +44,7 @@ import org.kneepoint.server.app.wording.Cautions;
  *                                measured to, so that its fitted knee model stands in for the data there (always false
  *                                for a typed-in grade)
  * @param tolerance               the tolerance study, left out of the document when none was asked for
+ * @param verdict                 whether the check meets its loss limit, in words, with each shortfall ({@link Verdicts#check})
  */
 public record CheckDocument(double pc, Point operatingPoint, double reversibleLossPercent, double irreversibleLossPercent,
         Double kneeMarginH, Double maxWorkingTemperatureK, boolean extrapolated, List<String> cautions, Double kneeField,
@@ -51,7 +52,7 @@ public record CheckDocument(double pc, Point operatingPoint, double reversibleLo
         String fieldConvention, double opposingFieldH, Double externalFieldH, double demagnetizingFactor,
         Double minWorkingTemperatureK, String minWorkingTemperatureStop, boolean operatingPointExtrapolated,
         boolean lossExtrapolated, boolean minWorkingTemperatureExtrapolated, boolean maxWorkingTemperatureExtrapolated,
-        boolean beyondMeasuredField, @JsonInclude(JsonInclude.Include.NON_NULL) ToleranceDocument tolerance) {
+        boolean beyondMeasuredField, @JsonInclude(JsonInclude.Include.NON_NULL) ToleranceDocument tolerance, Verdict verdict) {
 
     /** An operating point: H (A/m), B and J (T). */
     public record Point(double h, double b, double j) {
@@ -86,7 +87,7 @@ public record CheckDocument(double pc, Point operatingPoint, double reversibleLo
                 result.loadLine().opposingField(), field.convention() == FieldConvention.EXTERNAL ? field.field() : null,
                 AppliedField.demagnetizingFactor(result.loadLine().pc()), working.minimum().temperature(), stop(working.minimum()),
                 result.pointExtrapolated(), result.lossExtrapolated(), working.minimum().extrapolated(),
-                working.maximum().extrapolated(), result.beyondMeasuredField(), ToleranceDocument.of(run.tolerance()));
+                working.maximum().extrapolated(), result.beyondMeasuredField(), ToleranceDocument.of(run.tolerance()), run.verdict());
     }
 
     /** A working-temperature limit's reason in the document's words. */

@@ -12,6 +12,11 @@ import org.kneepoint.fitter.study.ToleranceStudyResult;
 public record CheckRun(GradeModel model, LoadLineSpec loadLine, DesignCheckResult result, double lossLimit, boolean extrapolated,
         LocalKneeResult local, ToleranceStudyResult tolerance) {
 
+    /** Whether the check meets its loss limit at its temperature, in words ({@link Verdicts#check}). */
+    public Verdict verdict() {
+        return Verdicts.check(this);
+    }
+
     /** The check's JSON document, the same for {@code check --json} and {@code /api/check}. */
     public CheckDocument document() {
         return CheckDocument.of(this);

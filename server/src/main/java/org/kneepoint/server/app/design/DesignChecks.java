@@ -62,7 +62,7 @@ public final class DesignChecks {
         GradeModel model = request.grade().model(stored, request.steps().stream().map(DutyStep::temperature).toList());
         List<DutyStepResult> results = DutySequence.run(model.model(), pc, request.steps());
         boolean extrapolated = results.stream().anyMatch(DutyStepResult::extrapolated);
-        return new DutyRun(model, request.loadLine(), pc, results, extrapolated);
+        return new DutyRun(model, request.loadLine(), pc, results, extrapolated, request.lossLimit());
     }
 
     /** A check swept over temperature ({@link TemperatureSweep}). */

@@ -9,9 +9,11 @@ import org.kneepoint.server.app.wording.Cautions;
 
 /**
  * A duty sequence as one JSON document: Pc, each step with its operating point and losses, extrapolated, whether any
- * step's point lies beyond the field range its curve was measured to, cautions.
+ * step's point lies beyond the field range its curve was measured to, cautions, the loss allowed after the sequence
+ * (percent) and the verdict against it ({@link Verdicts#duty}).
  */
-public record DutyDocument(double pc, List<Step> steps, boolean extrapolated, List<String> cautions, boolean beyondMeasuredField) {
+public record DutyDocument(double pc, List<Step> steps, boolean extrapolated, List<String> cautions, boolean beyondMeasuredField,
+        double lossLimitPercent, Verdict verdict) {
 
     /**
      * One step: its temperature (K), the circuit field Ha of its load line (A/m; the step's own field when it was given
@@ -35,6 +37,7 @@ public record DutyDocument(double pc, List<Step> steps, boolean extrapolated, Li
 
     static DutyDocument of(DutyRun run) {
         return new DutyDocument(run.pc(), run.results().stream().map(Step::of).toList(), run.extrapolated(),
-                Cautions.of(run.extrapolated(), run.beyondMeasuredField()), run.beyondMeasuredField());
+                Cautions.of(run.extrapolated(), run.beyondMeasuredField()), run.beyondMeasuredField(), 100.0 * run.lossLimit(),
+                run.verdict());
     }
 }

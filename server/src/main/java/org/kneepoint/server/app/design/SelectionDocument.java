@@ -3,7 +3,6 @@ package org.kneepoint.server.app.design;
 import java.util.List;
 import org.kneepoint.fitter.select.RankedGrade;
 import org.kneepoint.fitter.select.Requirements;
-import org.kneepoint.server.app.wording.EngineeringUnits;
 
 /**
  * One grade of a selection as JSON: pass or fail with the reasons in words, and the ranked values (SI; null when
@@ -14,10 +13,12 @@ import org.kneepoint.server.app.wording.EngineeringUnits;
  * @param minWorkingTemperatureK the lowest working temperature for the loss limit, K, or null (none, or not assessable)
  * @param beyondMeasuredField    whether the operating point lies below the field range the grade's curve was measured
  *                               to (its fitted knee model stands in there)
+ * @param verdict                the grade's verdict ({@link Verdicts#row}): {@code passes} equals {@code pass}, its reasons
+ *                               are {@code reasons}
  */
 public record SelectionDocument(String grade, String family, boolean assessable, boolean pass, List<String> reasons,
         Double fluxDensity, Double kneeMarginH, Double irreversibleLossPercent, Double maxWorkingTemperatureK, boolean extrapolated,
-        Double price, String fieldConvention, Double minWorkingTemperatureK, boolean beyondMeasuredField) {
+        Double price, String fieldConvention, Double minWorkingTemperatureK, boolean beyondMeasuredField, Verdict verdict) {
 
     static SelectionDocument of(SelectionRow row, Requirements requirements) {
         RankedGrade ranked = row.ranked();
@@ -26,22 +27,12 @@ public record SelectionDocument(String grade, String family, boolean assessable,
                 ranked == null ? null : 100.0 * ranked.irreversibleLoss(), ranked == null ? null : ranked.maxWorkingTemperature(),
                 row.extrapolated(), ranked == null ? null : ranked.price(),
                 requirements.field().convention().name().toLowerCase(java.util.Locale.ROOT),
-                ranked == null ? null : ranked.minWorkingTemperature(), ranked != null && ranked.beyondMeasuredField());
+                ranked == null ? null : ranked.minWorkingTemperature(), ranked != null && ranked.beyondMeasuredField(),
+                Verdicts.row(row, requirements));
     }
 
-    /** Why a grade fails or cannot be assessed, one sentence each; empty when it passes. */
+    /** Why a grade fails or cannot be assessed, one sentence each; empty when it passes ({@link Verdicts#reasons}). */
     public static List<String> reasons(SelectionRow row, Requirements requirements) {
-        if (!row.assessable()) {
-            return List.of("not assessable: " + row.notAssessable());
-        }
-        RankedGrade ranked = row.ranked();
-        return ranked.shortfalls().stream().map(shortfall -> switch (shortfall.requirement()) {
-            case MINIMUM_FLUX_DENSITY -> "flux density " + EngineeringUnits.tesla(ranked.fluxDensity()) + " is below the minimum "
-                    + EngineeringUnits.tesla(requirements.minimumFluxDensity());
-            case MAXIMUM_IRREVERSIBLE_LOSS -> "irreversible loss " + EngineeringUnits.percent(ranked.irreversibleLoss())
-                    + " exceeds the maximum " + EngineeringUnits.percent(requirements.maximumIrreversibleLoss());
-            case TEMPERATURE_RANGE -> EngineeringUnits.celsius(requirements.temperature()) + " lies "
-                    + EngineeringUnits.number(shortfall.by()) + " K outside the range of the grade's temperature model";
-        }).toList();
+        return Verdicts.reasons(row, requirements);
     }
 }

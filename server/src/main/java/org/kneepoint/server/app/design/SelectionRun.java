@@ -11,6 +11,11 @@ public record SelectionRun(Requirements requirements, LoadLineSpec loadLine, Ran
         rows = List.copyOf(rows);
     }
 
+    /** Whether any grade meets every requirement, in words ({@link Verdicts#selection}). */
+    public Verdict verdict() {
+        return Verdicts.selection(this);
+    }
+
     /** The selection's JSON document (an array), the same for {@code select --json} and {@code /api/select}. */
     public List<SelectionDocument> document() {
         return rows.stream().map(row -> SelectionDocument.of(row, requirements)).toList();

@@ -9,11 +9,12 @@ import org.kneepoint.server.app.wording.Cautions;
 /**
  * A temperature sweep as one JSON document (SI; percent and kelvin named in the key): Pc, the field and its
  * convention, the loss limit, one entry per temperature, the working temperatures for the limit (null when none),
- * whether anything is extrapolated or beyond the measured field, the cautions.
+ * whether anything is extrapolated or beyond the measured field, the cautions, and the verdict over every temperature
+ * ({@link Verdicts#sweep}).
  */
 public record SweepDocument(double pc, String fieldConvention, double opposingFieldH, Double externalFieldH, double lossLimitPercent,
         List<Step> steps, Double minWorkingTemperatureK, Double maxWorkingTemperatureK, boolean extrapolated,
-        boolean beyondMeasuredField, List<String> cautions) {
+        boolean beyondMeasuredField, List<String> cautions, Verdict verdict) {
 
     /**
      * One temperature: the operating point, 100·(Br(T)/Br(T0) − 1), the irreversible loss by the recoil line, the margin
@@ -35,6 +36,6 @@ public record SweepDocument(double pc, String fieldConvention, double opposingFi
                 run.field().circuitField(run.pc()), external ? run.field().field() : null, 100.0 * run.lossLimit(),
                 run.sweep().points().stream().map(Step::of).toList(), run.sweep().working().minimum().temperature(),
                 run.sweep().working().maximum().temperature(), run.extrapolated(), run.beyondMeasuredField(),
-                Cautions.of(run.extrapolated(), run.beyondMeasuredField()));
+                Cautions.of(run.extrapolated(), run.beyondMeasuredField()), run.verdict());
     }
 }

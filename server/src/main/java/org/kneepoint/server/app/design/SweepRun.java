@@ -17,6 +17,11 @@ public record SweepRun(GradeModel model, LoadLineSpec loadLine, double pc, Appli
         return sweep.points().stream().anyMatch(point -> point.beyondMeasuredField());
     }
 
+    /** Whether every temperature swept stays within the loss limit with B above zero and above the knee ({@link Verdicts#sweep}). */
+    public Verdict verdict() {
+        return Verdicts.sweep(this);
+    }
+
     /** The sweep's JSON document, the same for {@code sweep --json} and {@code /api/sweep}. */
     public SweepDocument document() {
         return SweepDocument.of(this);

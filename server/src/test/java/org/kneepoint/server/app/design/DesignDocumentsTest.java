@@ -90,7 +90,7 @@ class DesignDocumentsTest {
                 "maxWorkingTemperatureK", "extrapolated", "cautions", "kneeField", "kneeMarginTemperatureK", "maxWorkingTemperatureStop",
                 "lossLimitPercent", "localCheck", "fieldConvention", "opposingFieldH", "externalFieldH", "demagnetizingFactor",
                 "minWorkingTemperatureK", "minWorkingTemperatureStop", "operatingPointExtrapolated", "lossExtrapolated",
-                "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField"), JsonKeys.of(document));
+                "minWorkingTemperatureExtrapolated", "maxWorkingTemperatureExtrapolated", "beyondMeasuredField", "verdict"), JsonKeys.of(document));
         assertFalse(document.cautions().isEmpty(), "a result that feeds a safety decision carries its cautions");
     }
 

@@ -70,8 +70,9 @@ class LibraryDesignTest {
     void a_duty_sequence_never_recovers_an_irreversible_loss() {
         DutyDocument duty = DesignChecks.duty(new DutyRequest(new GradeChoice(NDFEB, NONE, NAMES),
                 new LoadLineSpec(null, 0.01, 0.005, null, null, null, null, false, "magnetometric"),
-                DutySteps.parse("20C:0, 100C:300kA/m, 20C:0")), stored).document();
-        assertEquals(List.of("pc", "steps", "extrapolated", "cautions", "beyondMeasuredField"), JsonKeys.of(duty));
+                DutySteps.parse("20C:0, 100C:300kA/m, 20C:0"), 0.01), stored).document();
+        assertEquals(List.of("pc", "steps", "extrapolated", "cautions", "beyondMeasuredField", "lossLimitPercent", "verdict"),
+                JsonKeys.of(duty));
         assertEquals(3, duty.steps().size());
         double hot = duty.steps().get(1).irreversibleLossPercent();
         assertTrue(hot >= 0, "a loss is never negative: " + hot);
@@ -93,7 +94,7 @@ class LibraryDesignTest {
             assertEquals(row.pass(), row.reasons().isEmpty(), row.toString());
         }
         assertEquals(List.of("grade", "family", "assessable", "pass", "reasons", "fluxDensity", "kneeMarginH", "irreversibleLossPercent",
-                "maxWorkingTemperatureK", "extrapolated", "price", "fieldConvention", "minWorkingTemperatureK", "beyondMeasuredField"),
+                "maxWorkingTemperatureK", "extrapolated", "price", "fieldConvention", "minWorkingTemperatureK", "beyondMeasuredField", "verdict"),
                 JsonKeys.of(rows.get(0)));
     }
 
