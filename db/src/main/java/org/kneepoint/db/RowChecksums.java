@@ -19,7 +19,9 @@ import org.kneepoint.db.jooq.tables.records.SusceptibilityPointRecord;
  * name, the row's id and its values in a fixed encoding: each value a tag byte (0 for null) and
  * its bytes; texts as UTF-8 with their length, numbers as their IEEE-754 or two's complement bits
  * (zero without its sign, which the engines may drop), times as epoch milliseconds. The same values
- * give the same checksum on H2 and PostgreSQL, when written and when read back.
+ * give the same checksum on H2 and PostgreSQL, when written and when read back. Every value is
+ * taken boxed, so a damaged file that reads a required column as null gives a checksum that does
+ * not match (damage told as such), never a null pointer.
  */
 final class RowChecksums {
 
@@ -28,18 +30,18 @@ final class RowChecksums {
     private RowChecksums() {
     }
 
-    static String importRecord(long id, String fileName, String sha256, OffsetDateTime importedAt, int curves, int points,
-            int susceptibilityPoints) {
+    static String importRecord(Long id, String fileName, String sha256, OffsetDateTime importedAt, Integer curves, Integer points,
+            Integer susceptibilityPoints) {
         return new Row("import_record").id(id).text(fileName).text(sha256).time(importedAt).number(curves).number(points)
                 .number(susceptibilityPoints).hex();
     }
 
-    static String family(long id, String name) {
+    static String family(Long id, String name) {
         return new Row("material_family").id(id).text(name).hex();
     }
 
-    static String grade(long id, String name, long familyId, String supplier, Double density, String notes, String provenance,
-            Double price, int rowVersion) {
+    static String grade(Long id, String name, Long familyId, String supplier, Double density, String notes, String provenance,
+            Double price, Integer rowVersion) {
         return new Row("grade").id(id).text(name).number(familyId).text(supplier).number(density).text(notes).text(provenance)
                 .number(price).number(rowVersion).hex();
     }
@@ -49,23 +51,23 @@ final class RowChecksums {
         return new Row("curve points").bytes(hValues).bytes(measuredValues).hex();
     }
 
-    static String curve(long id, long gradeId, double temperatureK, String kind, String quantity, String source, Long importId,
-            int pointCount, String pointsChecksum) {
+    static String curve(Long id, Long gradeId, Double temperatureK, String kind, String quantity, String source, Long importId,
+            Integer pointCount, String pointsChecksum) {
         return new Row("curve").id(id).number(gradeId).number(temperatureK).text(kind).text(quantity).text(source).number(importId)
                 .number(pointCount).text(pointsChecksum).hex();
     }
 
-    static String piece(long curveId, int piece, byte[] hValues, byte[] measuredValues) {
+    static String piece(Long curveId, Integer piece, byte[] hValues, byte[] measuredValues) {
         return new Row("curve_piece").id(curveId).number(piece).bytes(hValues).bytes(measuredValues).hex();
     }
 
-    static String susceptibility(long id, String material, double temperatureK, double chi, String form, Double density,
+    static String susceptibility(Long id, String material, Double temperatureK, Double chi, String form, Double density,
             Double molarMass, String source, Long importId) {
         return new Row("susceptibility_point").id(id).text(material).number(temperatureK).number(chi).text(form).number(density)
                 .number(molarMass).text(source).number(importId).hex();
     }
 
-    static String fit(long id, Long gradeId, Long curveId, String material, String model, String parameters, Double residual,
+    static String fit(Long id, Long gradeId, Long curveId, String material, String model, String parameters, Double residual,
             OffsetDateTime fittedAt, String programVersion) {
         return new Row("fit").id(id).number(gradeId).number(curveId).text(material).text(model).text(parameters).number(residual)
                 .time(fittedAt).text(programVersion).hex();
@@ -155,7 +157,7 @@ final class RowChecksums {
             text(table);
         }
 
-        Row id(long id) {
+        Row id(Long id) {
             return number(id);
         }
 
