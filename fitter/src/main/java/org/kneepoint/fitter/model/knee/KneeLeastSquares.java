@@ -116,24 +116,15 @@ final class KneeLeastSquares {
                 evaluations);
     }
 
-    /** The fall of the sum of squares the linearized model predicts for the move from {@code model} to {@code trial}: 2gᵀΔ − ΔᵀAΔ. */
+    /** The fall of the sum of squares the linearized model predicts for the move from {@code model} to {@code trial}. */
     private static double predictedDecrease(KneeCurve model, KneeCurve trial, double[][] normal, double[] gradient) {
         double[] from = parameters(model);
         double[] to = parameters(trial);
-        int n = from.length;
-        double[] delta = new double[n];
-        for (int k = 0; k < n; k++) {
+        double[] delta = new double[from.length];
+        for (int k = 0; k < from.length; k++) {
             delta[k] = to[k] - from[k];
         }
-        double sum = 0;
-        for (int a = 0; a < n; a++) {
-            double row = 0;
-            for (int b = 0; b < n; b++) {
-                row += normal[a][b] * delta[b];
-            }
-            sum += delta[a] * (2 * gradient[a] - row);
-        }
-        return sum;
+        return quadraticDecrease(delta, normal, gradient);
     }
 
     private static void clear(double[][] normal, double[] gradient) {
@@ -144,23 +135,32 @@ final class KneeLeastSquares {
     }
 
     /**
-     * The damped Gauss–Newton step from {@code model}, pulled inside the bounds. A parameter that sits on a bound the
-     * step pushes against is kept where it is and the step solved again without it (an active set), so that the others
-     * take the step that is best with it held, instead of crawling along the bound.
+     * The damped Gauss–Newton step from {@code model}, pulled inside the bounds. A parameter that the step would carry
+     * past a bound is held where the bound puts it and the step solved again for the others (an active set), so that
+     * they take the step that is best with it held there, instead of crawling towards the bound.
      */
     private Step step(KneeCurve model, double[][] normal, double[] gradient, double lambda) {
         int n = gradient.length;
         double[] from = parameters(model);
         boolean[] held = new boolean[n];
+        double[] heldStep = new double[n];
         double[][] a = new double[n][n];
         double[] b = new double[n];
         double[] p = new double[n];
         KneeCurve trial = model;
-        double decrease = Double.POSITIVE_INFINITY;
+        double[] step = new double[n];
+        boolean singular = false;
         for (int pass = 0; pass <= n; pass++) {
             for (int k = 0; k < n; k++) {
                 System.arraycopy(normal[k], 0, a[k], 0, n);
                 b[k] = gradient[k];
+            }
+            for (int k = 0; k < n; k++) {
+                if (held[k]) {
+                    for (int m = 0; m < n; m++) {
+                        b[m] -= normal[m][k] * heldStep[k];
+                    }
+                }
             }
             for (int k = 0; k < n; k++) {
                 if (held[k]) {
@@ -172,39 +172,47 @@ final class KneeLeastSquares {
                     b[k] = 0;
                 }
             }
-            double[] step = SmallLinearSystem.solveDamped(a, b, lambda);
-            decrease = Double.POSITIVE_INFINITY;
-            if (step == null) {
-                step = new double[n];
-            } else {
-                decrease = 0;
-                for (int k = 0; k < n; k++) {
-                    decrease += b[k] * step[k];
-                }
-            }
+            double[] solved = SmallLinearSystem.solveDamped(a, b, lambda);
+            singular = solved == null;
             for (int k = 0; k < n; k++) {
+                step[k] = held[k] ? heldStep[k] : singular ? 0.0 : solved[k];
                 p[k] = from[k] + step[k];
             }
             trial = bounded(model, p);
             double[] q = parameters(trial);
             boolean more = false;
             for (int k = 0; k < n; k++) {
-                if (!held[k] && q[k] == from[k] && p[k] != from[k]) {
+                if (!held[k] && q[k] != p[k]) {
                     held[k] = true;
+                    heldStep[k] = q[k] - from[k];
                     more = true;
                 }
             }
-            if (!more) {
+            if (!more || singular) {
                 break;
             }
         }
-        return new Step(trial, decrease);
+        return new Step(trial, singular ? Double.POSITIVE_INFINITY : quadraticDecrease(step, normal, gradient));
+    }
+
+    /** The fall of the sum of squares the linearized model predicts for a move δ: 2gᵀδ − δᵀAδ. */
+    private static double quadraticDecrease(double[] delta, double[][] normal, double[] gradient) {
+        int n = delta.length;
+        double sum = 0;
+        for (int a = 0; a < n; a++) {
+            double row = 0;
+            for (int b = 0; b < n; b++) {
+                row += normal[a][b] * delta[b];
+            }
+            sum += delta[a] * (2 * gradient[a] - row);
+        }
+        return sum;
     }
 
     /**
-     * A step's model inside the bounds, and gᵀδ of the step before it was pulled inside them (the fall of the sum of
-     * squares the linearized model predicts for it; with no damping the Gauss–Newton decrement over the parameters
-     * not held on a bound), +∞ when the equations are singular.
+     * A step's model inside the bounds, and the fall of the sum of squares the linearized model predicts for the step
+     * (with no damping the Gauss–Newton decrement over the parameters not held at a bound), +∞ when the equations are
+     * singular.
      */
     private record Step(KneeCurve model, double decrease) {
     }
@@ -278,11 +286,22 @@ final class KneeLeastSquares {
         return dot(residuals, residuals, count);
     }
 
+    /** u·v over the first {@code count} entries, in four independent sums so that the additions need not wait on each other. */
     private static double dot(double[] u, double[] v, int count) {
-        double sum = 0;
-        for (int i = 0; i < count; i++) {
-            sum += u[i] * v[i];
+        double s0 = 0;
+        double s1 = 0;
+        double s2 = 0;
+        double s3 = 0;
+        int i = 0;
+        for (; i + 3 < count; i += 4) {
+            s0 += u[i] * v[i];
+            s1 += u[i + 1] * v[i + 1];
+            s2 += u[i + 2] * v[i + 2];
+            s3 += u[i + 3] * v[i + 3];
         }
-        return sum;
+        for (; i < count; i++) {
+            s0 += u[i] * v[i];
+        }
+        return (s0 + s1) + (s2 + s3);
     }
 }
