@@ -23,7 +23,9 @@ import org.kneepoint.fitter.select.Requirements;
  * (PostgreSQL) library. A grade without a model is kept as its refusal, like a value. One entry per grade,
  * replaced when the grade changes (grades are never deleted, so the size is bounded by the library's). The results
  * of requests — a check's run, a grade's row in a selection — are kept the same way, per grade, for the last
- * {@value #KEPT_REQUESTS} distinct requests: a repeated request costs the stamp query and the answer's writing.
+ * {@value #KEPT_REQUESTS} distinct requests: a repeated request costs the stamp query and the answer's writing. A
+ * selection's listing of the grades is kept while every grade's stamp is as it was read under. Kept models remember the
+ * losses they compute ({@link GradeModel#rememberingLosses}), so a check at a new temperature repeats little work.
  */
 public final class GradeModelCache {
 
