@@ -24,9 +24,7 @@ public final class DesignCheck {
     /** The full check with a field given in either convention ({@link AppliedField}). */
     public static DesignCheckResult of(TemperatureModel model, double pc, AppliedField field, double temperature,
             double lossLimit) {
-        if (!(lossLimit > 0.0 && lossLimit < 1.0)) {
-            throw new BadInputException("loss limit must lie strictly between 0 % and 100 %, got " + lossLimit * 100 + " %");
-        }
+        requireLossLimit(lossLimit);
         LoadLine line = field.loadLine(pc);
         IntrinsicCurve curve = model.at(temperature);
         OperatingPoint point = line.on(curve);
@@ -40,10 +38,31 @@ public final class DesignCheck {
                 model.isExtrapolated(referenceTemperature), curve.beyondMeasuredField(point.h()));
     }
 
+    /**
+     * What a grade selection ranks by ({@link LossCheck}), each part computed as {@link #of} computes it and refused where
+     * {@link #of} refuses (the curve at T0 is asked for too, as there); the knee margin in kelvin is not searched for.
+     */
+    public static LossCheck forRanking(TemperatureModel model, double pc, AppliedField field, double temperature,
+            double lossLimit) {
+        requireLossLimit(lossLimit);
+        LoadLine line = field.loadLine(pc);
+        IntrinsicCurve curve = model.at(temperature);
+        OperatingPoint point = line.on(curve);
+        Double knee = curve.kneeField().isPresent() ? curve.kneeField().getAsDouble() : null;
+        model.at(model.referenceTemperature());
+        return new LossCheck(point, knee, IrreversibleLoss.after(curve, point), WorkingTemperatures.of(model, line, temperature,
+                lossLimit), curve.beyondMeasuredField(point.h()));
+    }
+
+    private static void requireLossLimit(double lossLimit) {
+        if (!(lossLimit > 0.0 && lossLimit < 1.0)) {
+            throw new BadInputException("loss limit must lie strictly between 0 % and 100 %, got " + lossLimit * 100 + " %");
+        }
+    }
+
     /** The irreversible loss fraction after exposure to {@code line} at {@code temperature}. */
     public static double lossAt(TemperatureModel model, LoadLine line, double temperature) {
-        IntrinsicCurve curve = model.at(temperature);
-        return IrreversibleLoss.after(curve, line.on(curve));
+        return model.irreversibleLoss(line, temperature);
     }
 
     private static Double kneeMarginTemperature(TemperatureModel model, LoadLine line, double temperature, boolean aboveKnee) {

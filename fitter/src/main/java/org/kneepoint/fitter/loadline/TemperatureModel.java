@@ -25,4 +25,14 @@ public interface TemperatureModel {
     default boolean isExtrapolated(double temperature) {
         return false;
     }
+
+    /**
+     * The irreversible loss fraction after exposure to {@code line} at {@code temperature} ({@link IrreversibleLoss}, by
+     * the recoil line through the operating point on the curve at that temperature). A model may keep what it computed
+     * ({@link RememberedLosses}); the value is the same either way.
+     */
+    default double irreversibleLoss(LoadLine line, double temperature) {
+        IntrinsicCurve curve = at(temperature);
+        return IrreversibleLoss.after(curve, line.on(curve));
+    }
 }

@@ -65,7 +65,13 @@ public final class WorkingTemperatures {
         }
         nodes[STEPS + 1] = temperature;
         Arrays.sort(nodes);
-        return Arrays.stream(nodes).distinct().toArray();
+        int distinct = 1;
+        for (int k = 1; k < nodes.length; k++) {
+            if (Double.doubleToLongBits(nodes[k]) != Double.doubleToLongBits(nodes[distinct - 1])) {
+                nodes[distinct++] = nodes[k];
+            }
+        }
+        return Arrays.copyOf(nodes, distinct);
     }
 
     private static int nearestWithin(boolean[] within, int check) {

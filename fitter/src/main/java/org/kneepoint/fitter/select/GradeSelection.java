@@ -3,7 +3,7 @@ package org.kneepoint.fitter.select;
 import java.util.ArrayList;
 import java.util.List;
 import org.kneepoint.fitter.loadline.DesignCheck;
-import org.kneepoint.fitter.loadline.DesignCheckResult;
+import org.kneepoint.fitter.loadline.LossCheck;
 import org.kneepoint.fitter.loadline.TemperatureModel;
 
 /**
@@ -37,7 +37,7 @@ public final class GradeSelection {
             return new RankedGrade(candidate.name(), List.of(new Shortfall(Shortfall.Requirement.TEMPERATURE_RANGE, outside)),
                     Double.NaN, Double.NaN, Double.NaN, null, candidate.price(), null, false);
         }
-        DesignCheckResult check = DesignCheck.of(model, requirements.loadLine().pc(), requirements.field(), temperature,
+        LossCheck check = DesignCheck.forRanking(model, requirements.loadLine().pc(), requirements.field(), temperature,
                 requirements.maximumIrreversibleLoss());
         List<Shortfall> shortfalls = DesignShortfalls.of(check, model.at(temperature), requirements.minimumFluxDensity());
         double flux = check.point().b();

@@ -7,6 +7,7 @@ import org.kneepoint.fitter.library.LibraryCurve;
 import org.kneepoint.fitter.loadline.BoundedTemperatureModel;
 import org.kneepoint.fitter.loadline.DesignCheckResult;
 import org.kneepoint.fitter.loadline.MagnetFamily;
+import org.kneepoint.fitter.loadline.RememberedLosses;
 import org.kneepoint.fitter.loadline.TemperatureModel;
 import org.kneepoint.fitter.temperature.CurveAtTemperature;
 import org.kneepoint.server.app.grades.GradeCurves;
@@ -44,6 +45,14 @@ public record GradeModel(TemperatureModel model, String description, DoublePredi
                 + " to " + Temperatures.celsius(temperatures.get(temperatures.size() - 1)) + ", used as measured at those"
                 + " temperatures and blended between them)";
         return new GradeModel(model, description, model::isExtrapolated);
+    }
+
+    /**
+     * This model keeping the losses it computes ({@link RememberedLosses}), for a model kept and asked again
+     * ({@link GradeModelCache}): the same answers, most of a working-temperature search answered from memory.
+     */
+    public GradeModel rememberingLosses() {
+        return new GradeModel(new RememberedLosses(model), description, extrapolated);
     }
 
     /** Whether any part of the check (T, T0, either working temperature) rests on an extrapolated curve. */

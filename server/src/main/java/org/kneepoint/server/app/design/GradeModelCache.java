@@ -1,6 +1,7 @@
 package org.kneepoint.server.app.design;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.ConcurrentHashMap;
@@ -22,12 +23,17 @@ import org.kneepoint.fitter.select.Requirements;
  * (PostgreSQL) library. A grade without a model is kept as its refusal, like a value. One entry per grade,
  * replaced when the grade changes (grades are never deleted, so the size is bounded by the library's). The results
  * of requests — a check's run, a grade's row in a selection — are kept the same way, per grade, for the last
- * {@value #KEPT_REQUESTS} distinct requests: a repeated request costs the stamp query and the answer's writing.
+ * {@value #KEPT_REQUESTS} distinct requests: a repeated request costs the stamp query and the answer's writing. A
+ * selection's listing of the grades is kept while every grade's stamp is as it was read under. Kept models remember the
+ * losses they compute ({@link GradeModel#rememberingLosses}), so a check at a new temperature repeats little work.
  */
 public final class GradeModelCache {
 
     /** How many distinct requests (a check's inputs, a selection's requirements) keep their results. */
     static final int KEPT_REQUESTS = 64;
+
+    /** How many listings of the grades (the whole library, or one family) are kept. */
+    static final int KEPT_LISTINGS = 8;
 
     /** The stamp of a typed-in grade: no stored data, so its results never change. */
     private static final GradeStamp TYPED = new GradeStamp(0, 0, 0, 0);
@@ -44,13 +50,23 @@ public final class GradeModelCache {
         }
     };
 
+    /** The kept listings of the grades, by family (the whole library under ""), for the last few families asked. */
+    private final Map<String, Listing> listings = new LinkedHashMap<>(16, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<String, Listing> eldest) {
+            return size() > KEPT_LISTINGS;
+        }
+    };
+
     /** The temperature model of a stored grade (as {@link GradeModel#stored}); an unknown grade is not found, as there. */
     public GradeModel stored(LibraryReader reader, String grade) {
         Optional<GradeStamp> stamp = reader.gradeStamp(grade);
         if (stamp.isEmpty()) {
             return GradeModel.stored(reader, grade);
         }
-        return kept(new Key(grade), stamp.get(), () -> GradeModel.stored(reader, grade), GradeModel.class);
+        return kept(new Key(grade), stamp.get(), () -> GradeModel.stored(reader, grade).rememberingLosses(), GradeModel.class);
     }
 
     /**
@@ -71,7 +87,7 @@ public final class GradeModelCache {
             return DesignChecks.check(request, grade -> GradeModel.stored(reader, grade));
         }
         return result(request, name, stamp.get(), () -> DesignChecks.check(request,
-                grade -> kept(new Key(grade), stamp.get(), () -> GradeModel.stored(reader, grade), GradeModel.class)));
+                grade -> kept(new Key(grade), stamp.get(), () -> GradeModel.stored(reader, grade).rememberingLosses(), GradeModel.class)));
     }
 
     /**
@@ -88,7 +104,12 @@ public final class GradeModelCache {
                 if (stamp == null) {
                     return LibrarySelection.model(reader, grade).model();
                 }
-                return kept(new Key(grade.name()), stamp, () -> LibrarySelection.model(reader, grade), GradeModel.class).model();
+                return kept(new Key(grade.name()), stamp, () -> LibrarySelection.model(reader, grade).rememberingLosses(), GradeModel.class).model();
+            }
+
+            @Override
+            public List<GradeSummary> grades(LibraryReader library, String family) {
+                return listing(library, family, stamps);
             }
 
             @Override
@@ -97,6 +118,28 @@ public final class GradeModelCache {
                 return stamp == null ? assess.get() : result(requirements, grade.name(), stamp, assess);
             }
         };
+    }
+
+    /**
+     * The grades of {@code family} (all when null) as the reader lists them, kept while every grade's stamp is as in
+     * {@code stamps}: the listing is made of the grades' own rows and their curves' temperatures, and any write that
+     * changes those (an edit, added curves, a new grade) changes a stamp. The stamps were read before the listing, so a
+     * listing is never older than the stamps it is kept with.
+     */
+    private List<GradeSummary> listing(LibraryReader reader, String family, Map<String, GradeStamp> stamps) {
+        String key = family == null ? "" : "family " + family;
+        Listing kept;
+        synchronized (listings) {
+            kept = listings.get(key);
+        }
+        if (kept != null && kept.stamps().equals(stamps)) {
+            return kept.grades();
+        }
+        List<GradeSummary> grades = reader.grades(family);
+        synchronized (listings) {
+            listings.put(key, new Listing(Map.copyOf(stamps), grades));
+        }
+        return grades;
     }
 
     /** The result of {@code request} on {@code grade}, kept while the grade's stamp holds, for the last distinct requests. */
@@ -136,6 +179,10 @@ public final class GradeModelCache {
             throw entry.failure();
         }
         return type.cast(entry.value());
+    }
+
+    /** A kept listing of the grades and the stamps of every grade when it was read. */
+    private record Listing(Map<String, GradeStamp> stamps, List<GradeSummary> grades) {
     }
 
     /** The kept model of one grade. */

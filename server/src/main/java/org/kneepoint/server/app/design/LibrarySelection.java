@@ -37,6 +37,11 @@ public final class LibrarySelection {
         /** The grade's model; a grade without one is refused (a {@link KneepointException}). */
         TemperatureModel of(GradeSummary grade);
 
+        /** The grades (of {@code family}, when not null) to rank, as {@link LibraryReader#grades} reads them (here, always). */
+        default List<GradeSummary> grades(LibraryReader reader, String family) {
+            return reader.grades(family);
+        }
+
         /** The grade's row for {@code requirements}: {@code assess} computes it (here, always). */
         default SelectionRow row(GradeSummary grade, Requirements requirements, Supplier<SelectionRow> assess) {
             return assess.get();
@@ -58,7 +63,7 @@ public final class LibrarySelection {
             Models models) {
         List<SelectionRow> assessed = new ArrayList<>();
         List<SelectionRow> notAssessable = new ArrayList<>();
-        for (GradeSummary grade : reader.grades(family)) {
+        for (GradeSummary grade : models.grades(reader, family)) {
             SelectionRow row = models.row(grade, requirements, () -> assess(grade, requirements, models));
             (row.ranked() == null ? notAssessable : assessed).add(row);
         }
