@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.Rectangle;
 import java.awt.geom.Ellipse2D;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.jfree.chart.JFreeChart;
@@ -36,8 +37,11 @@ public final class ElementMapChart {
 
     private static final double MILLI = 1000.0;
     private static final double KILO = 1000.0;
+    /** The side of a dot, px: larger for few dots, 4 px from {@value #SMALL_FROM} dots on. */
     private static final double DOT = 4.0;
-    private static final double RING = 13.0;
+    private static final int SMALL_FROM = 5_000;
+    /** How much wider a ring is than a dot, px. */
+    private static final double RING = 9.0;
     /** The room the axes, title, legend and scale take around the plot, px (for one scale on both axes). */
     private static final int SIDE_ROOM = 230;
     private static final int TOP_AND_BOTTOM_ROOM = 140;
@@ -57,9 +61,11 @@ public final class ElementMapChart {
         NumberAxis x = new NumberAxis(MapPlane.axis(across) + " (mm)");
         NumberAxis y = new NumberAxis(MapPlane.axis(up) + " (mm)");
         sameScale(x, y, h, v, width - SIDE_ROOM, height - TOP_AND_BOTTOM_ROOM);
-        XYPlot plot = new XYPlot(worst(map.worst(), across, up), x, y, ringRenderer());
+        double dot = map.drawn() < 500 ? 2.5 * DOT : map.drawn() < SMALL_FROM ? 1.5 * DOT : DOT;
+        Rings rings = rings(map.worst(), across, up);
+        XYPlot plot = new XYPlot(rings.data(), x, y, ringRenderer(rings.labels(), dot));
         plot.setDataset(1, dots);
-        plot.setRenderer(1, new DotRenderer(palette, DOT));
+        plot.setRenderer(1, new DotRenderer(palette, dot));
         ChartStyle.apply(plot);
         plot.setDomainZeroBaselineVisible(false);
         plot.setRangeZeroBaselineVisible(false);
@@ -126,23 +132,47 @@ public final class ElementMapChart {
         return low > high ? new double[] {-1, 1} : new double[] {low, high};
     }
 
-    private static XYSeriesCollection worst(List<WorstElement> worst, int across, int up) {
+    /**
+     * The worst elements' places on the plane, one ring per place: elements stacked along the axis left out share a
+     * ring, labelled with all their ranks ("1, 2").
+     */
+    private static Rings rings(List<WorstElement> worst, int across, int up) {
         XYSeries series = new XYSeries("worst elements, numbered as in the table", false, true);
+        List<String> labels = new ArrayList<>();
+        int rank = 1;
         for (WorstElement element : worst) {
             double[] position = {element.x(), element.y(), element.z()};
-            series.add(position[across] * MILLI, position[up] * MILLI, false);
+            double h = position[across] * MILLI;
+            double v = position[up] * MILLI;
+            int same = -1;
+            for (int i = 0; i < series.getItemCount() && same < 0; i++) {
+                if (series.getX(i).doubleValue() == h && series.getY(i).doubleValue() == v) {
+                    same = i;
+                }
+            }
+            if (same < 0) {
+                series.add(h, v, false);
+                labels.add(Integer.toString(rank++));
+            } else {
+                labels.set(same, labels.get(same) + ", " + rank++);
+            }
         }
-        return new XYSeriesCollection(series);
+        return new Rings(new XYSeriesCollection(series), labels);
     }
 
-    private static XYLineAndShapeRenderer ringRenderer() {
+    /** The rings of the worst elements and the label of each. */
+    private record Rings(XYSeriesCollection data, List<String> labels) {
+    }
+
+    private static XYLineAndShapeRenderer ringRenderer(List<String> labels, double dot) {
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(false, true);
-        renderer.setSeriesShape(0, new Ellipse2D.Double(-RING / 2, -RING / 2, RING, RING));
+        double ring = dot + RING;
+        renderer.setSeriesShape(0, new Ellipse2D.Double(-ring / 2, -ring / 2, ring, ring));
         renderer.setSeriesShapesFilled(0, false);
         renderer.setUseOutlinePaint(false);
         renderer.setSeriesPaint(0, FieldPalette.OUTLINE);
         renderer.setSeriesStroke(0, new BasicStroke(2.2f));
-        renderer.setDefaultItemLabelGenerator((dataset, series, item) -> Integer.toString(item + 1));
+        renderer.setDefaultItemLabelGenerator((dataset, series, item) -> labels.get(item));
         renderer.setDefaultItemLabelsVisible(true);
         renderer.setDefaultItemLabelFont(new Font(Font.SANS_SERIF, Font.BOLD, 12));
         renderer.setDefaultItemLabelPaint(TemperaturePalette.INK);

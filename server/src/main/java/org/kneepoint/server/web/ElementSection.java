@@ -104,7 +104,7 @@ final class ElementSection {
         }
         List<PlaneLink> planes = new ArrayList<>();
         for (MapPlane other : MapPlane.values()) {
-            planes.add(new PlaneLink(other.label(), "/check/elements/" + key + "?plane=" + other.label(), other == plane));
+            planes.add(new PlaneLink(other.label(), "/check/elements/" + key + "?plane=" + other.label() + "#element-map", other == plane));
         }
         return new Results(summary, worst, cases, "/charts/elements/" + key + ".svg?plane=" + plane.label(), plane.label(), planes,
                 note(kept.map()), document.extrapolated());
