@@ -118,6 +118,37 @@ class BrowserTest {
     }
 
     @Test
+    void element_files_uploaded_on_the_check_page_show_their_summary_and_map() throws Exception {
+        List<String> paths = new java.util.ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            Path file = folder.resolve(ExampleElementFiles.NAMES.get(i));
+            Files.writeString(file, ExampleElementFiles.text(i));
+            paths.add(file.toAbsolutePath().toString());
+        }
+        open("/check");
+        org.openqa.selenium.WebElement form = browser.findElement(By.cssSelector("form.upload"));
+        new Select(form.findElement(By.name("grade"))).selectByVisibleText("DEMO NdFeB 40/160");
+        form.findElement(By.name("temperature")).sendKeys("80C");
+        new Select(form.findElement(By.name("plane"))).selectByValue("xz");
+        form.findElement(By.cssSelector("input[type=file]")).sendKeys(String.join("\n", paths));
+        form.findElement(By.cssSelector("button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(20)).until(ExpectedConditions.presenceOfElementLocated(By.id("element-results")));
+        String summary = browser.findElement(By.cssSelector("#element-results + table")).getText();
+        assertTrue(summary.contains("irreversible loss of the moment"), summary);
+        assertTrue(summary.contains("250"), summary);
+        org.openqa.selenium.WebElement map = browser.findElement(By.cssSelector("img[src^='/charts/elements/']"));
+        new WebDriverWait(browser, Duration.ofSeconds(20)).until(driver -> ((Number) ((org.openqa.selenium.JavascriptExecutor) driver)
+                .executeScript("return arguments[0].naturalWidth", map)).intValue() > 0);
+        screenshot("element-check");
+        browser.findElement(By.linkText("xy")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(20)).until(ExpectedConditions.urlContains("plane=xy"));
+        org.openqa.selenium.WebElement xy = browser.findElement(By.cssSelector("img[src^='/charts/elements/']"));
+        new WebDriverWait(browser, Duration.ofSeconds(20)).until(driver -> ((Number) ((org.openqa.selenium.JavascriptExecutor) driver)
+                .executeScript("return arguments[0].naturalWidth", xy)).intValue() > 0);
+        screenshot("element-map-xy");
+    }
+
+    @Test
     void a_file_uploaded_on_the_import_page_is_checked_then_imported() throws Exception {
         Path file = folder.resolve("upload.csv");
         Files.writeString(file, "# grade: Invented browser grade\n# family: invented family\n# temperature: 20 °C\n"

@@ -60,8 +60,7 @@ public final class ElementCheck {
             lost += v * states.loss[i];
         }
         return new ElementCheckResult(volume, pastKnee / volume, lost / volume, settings.lossLimit(), settings.transverse(),
-                WorstElements.of(first, states.loss, states.hParallel, states.margin, WORST_LISTED), results, states.loss,
-                states.remanence, states.recoilPermeability);
+                WorstElements.of(first, states.loss, states.hParallel, states.margin, WORST_LISTED), results, states);
     }
 
     private static LoadCaseResult loadCase(TemperatureModel model, ElementField table, ElementSettings settings,

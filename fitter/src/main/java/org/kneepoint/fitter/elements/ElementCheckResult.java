@@ -20,10 +20,11 @@ public final class ElementCheckResult {
     private final double[] loss;
     private final double[] remanence;
     private final double[] recoilPermeability;
+    private final double[] margin;
+    private final boolean[] pastKnee;
 
     ElementCheckResult(double volume, double volumeFractionPastKnee, double irreversibleLoss, double lossLimit,
-            TransverseRule transverse, List<WorstElement> worstElements, List<LoadCaseResult> cases, double[] loss,
-            double[] remanence, double[] recoilPermeability) {
+            TransverseRule transverse, List<WorstElement> worstElements, List<LoadCaseResult> cases, ElementStates states) {
         this.volume = volume;
         this.volumeFractionPastKnee = volumeFractionPastKnee;
         this.irreversibleLoss = irreversibleLoss;
@@ -31,9 +32,11 @@ public final class ElementCheckResult {
         this.transverse = transverse;
         this.worstElements = List.copyOf(worstElements);
         this.cases = List.copyOf(cases);
-        this.loss = loss;
-        this.remanence = remanence;
-        this.recoilPermeability = recoilPermeability;
+        this.loss = states.loss;
+        this.remanence = states.remanence;
+        this.recoilPermeability = states.recoilPermeability;
+        this.margin = states.margin;
+        this.pastKnee = states.pastKnee;
     }
 
     /** Number of elements. */
@@ -94,6 +97,19 @@ public final class ElementCheckResult {
     /** Remanence of element {@code i} after every case, T: (1 − loss)·Br at its temperature in the last case. */
     public double remanence(int i) {
         return remanence[i];
+    }
+
+    /**
+     * Margin to the knee of element {@code i} at the point that set its recoil line (as for the worst elements), A/m:
+     * H − H_knee of the field the rule makes act, negative past the knee; NaN where the curve has no knee.
+     */
+    public double margin(int i) {
+        return margin[i];
+    }
+
+    /** Whether element {@code i} passed the knee in some load case. */
+    public boolean pastKnee(int i) {
+        return pastKnee[i];
     }
 
     /** Relative recoil permeability of element {@code i} at its temperature in the last case. */

@@ -7,6 +7,8 @@ import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.curve.Quantity;
 import org.kneepoint.importer.export.ExportUnits;
+import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.server.app.grades.CurveDamage;
 import org.kneepoint.server.app.grades.CurveExport;
 import org.kneepoint.server.app.grades.GradeCurves;
 import picocli.CommandLine.Command;
@@ -20,7 +22,8 @@ import picocli.CommandLine.Model.CommandSpec;
  * {@code kneepoint export GRADE --temperature T}: a grade's curve at T as CSV (re-readable by
  * {@code import}), JSON or a bare table, in SI or CGS, as stored or resampled, optionally shifted
  * so that B = 0 at H = 0. The curve is the stored one at T, or else the temperature model's
- * ({@link GradeCurves}), marked modeled and, outside the measured temperatures, extrapolated.
+ * ({@link GradeCurves}), marked modeled and, outside the measured temperatures, extrapolated; with {@code --after STEPS
+ * --pc P} that of a magnet the steps damaged ({@link CurveDamage}).
  */
 @Command(name = "export", mixinStandardHelpOptions = true, description = "Export a grade's curve at a temperature.")
 final class ExportCommand implements Callable<Integer> {
@@ -62,18 +65,27 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--bare", description = "Only two columns of numbers: no metadata, no header (CSV only).")
     private boolean bare;
 
+    @Option(names = "--after", converter = DutyStepsConverter.class, paramLabel = "STEPS",
+            description = "Export the curve of a magnet damaged by these steps TEMPERATURE:FIELD[:KIND] in order, as 'duty' takes"
+                    + " them, e.g. \"150C:300kA/m, 20C:0\": its recoil line down to the worst point, the curve beyond. Needs --pc.")
+    private DutyStepsConverter.Steps after;
+
+    @Option(names = "--pc", paramLabel = "P", description = "Permeance coefficient of the load line the --after steps act on.")
+    private Double pc;
+
     @Option(names = {"-o", "--output"}, paramLabel = "FILE", description = "Write to FILE instead of standard output.")
     private Path output;
 
     @Override
     public Integer call() {
+        CurveDamage damage = damage();
         String text;
         try (Library library = libraryOption.open()) {
             GradeCurves.stored(library.reader(), grade);
             CurveExport export = new CurveExport(grade, temperatureK,
                     format == Format.json ? CurveExport.Format.JSON : CurveExport.Format.CSV,
                     curve == CurveChoice.normal ? Quantity.B : Quantity.J, points,
-                    units == UnitChoice.si ? ExportUnits.SI : ExportUnits.CGS, shifted, bare);
+                    units == UnitChoice.si ? ExportUnits.SI : ExportUnits.CGS, shifted, bare, damage);
             text = export.write(library.reader(), VersionInfo.version());
         }
         if (output == null) {
@@ -83,5 +95,18 @@ final class ExportCommand implements Callable<Integer> {
             OutputFile.write(output, text);
         }
         return 0;
+    }
+
+    private CurveDamage damage() {
+        if (after == null && pc == null) {
+            return null;
+        }
+        if (after == null) {
+            throw new BadInputException("--pc sets the load line of the --after steps; give --after too, or leave out --pc");
+        }
+        if (pc == null) {
+            throw new BadInputException("--after needs --pc, the permeance coefficient of the load line its steps act on");
+        }
+        return new CurveDamage(pc, after.list());
     }
 }

@@ -2,6 +2,7 @@ package org.kneepoint.server.http;
 
 import io.javalin.http.Context;
 import java.util.Locale;
+import java.util.function.UnaryOperator;
 import java.util.regex.Pattern;
 import org.kneepoint.fitter.error.BadInputException;
 import org.kneepoint.fitter.error.InputLocation;
@@ -11,22 +12,33 @@ import org.kneepoint.server.app.InputLimits;
 import org.kneepoint.server.app.design.Position;
 
 /**
- * Reads query parameters of a request into SI values. A missing required parameter, a value of
- * the wrong kind or a value out of range is bad input naming the parameter and what was expected.
+ * Reads query parameters of a request (or a page's form fields, {@link #form}) into SI values. A missing required
+ * parameter, a value of the wrong kind or a value out of range is bad input naming the parameter and what was expected.
  */
 final class Query {
 
     private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");
 
-    private final Context context;
+    private final UnaryOperator<String> values;
+    private final String kind;
 
     Query(Context context) {
-        this.context = context;
+        this(context::queryParam, "query parameter");
+    }
+
+    private Query(UnaryOperator<String> values, String kind) {
+        this.values = values;
+        this.kind = kind;
+    }
+
+    /** The fields of a page's form (URL-encoded or multipart), named in messages as form fields. */
+    static Query form(Context context) {
+        return new Query(context::formParam, "form field");
     }
 
     /** The text of a parameter, or null when it is absent or blank. */
     String text(String name) {
-        String value = context.queryParam(name);
+        String value = values.apply(name);
         return value == null || value.isBlank() ? null : value.strip();
     }
 
@@ -160,7 +172,7 @@ final class Query {
         }
     }
 
-    private static double quantity(String name, String text, Dimension dimension) {
+    private double quantity(String name, String text, Dimension dimension) {
         try {
             return QuantityParser.parse(text, dimension);
         } catch (IllegalArgumentException e) {
@@ -168,7 +180,12 @@ final class Query {
         }
     }
 
-    private static BadInputException bad(String name, String problem) {
-        return new BadInputException(InputLocation.of("query parameter '" + name + "'"), problem);
+    /** Where a value of this request comes from, for messages: "query parameter 'name'" or "form field 'name'". */
+    InputLocation location(String name) {
+        return InputLocation.of(kind + " '" + name + "'");
+    }
+
+    private BadInputException bad(String name, String problem) {
+        return new BadInputException(location(name), problem);
     }
 }

@@ -13,7 +13,7 @@ import org.kneepoint.server.app.wording.Temperatures;
  * The Check page ({@code /check}, template {@code check.jte}): a form — a grade of the library or one typed in,
  * the load line, temperature, opposing field, loss limit — and, once sent, the check's results, the
  * operating-point chart and the cautions. The form sends the query parameters of {@code GET /api/check}, so the
- * page and the route compute the same check.
+ * page and the route compute the same check. Below it, the element check of a field solver's files ({@link ElementSection}).
  */
 final class CheckPage {
 
@@ -22,7 +22,7 @@ final class CheckPage {
 
     /** What the page shows: the problem of the request (or null), the form's fields, and the results once sent (or null). */
     record View(Layout.Frame frame, String problem, FormFields.Choice grade, List<FormFields.TextField> typedGrade,
-            FormFields.LoadLine loadLine, List<FormFields.TextField> duty, Results results) {
+            FormFields.LoadLine loadLine, List<FormFields.TextField> duty, Results results, ElementSection.View elements) {
     }
 
     /** A check's results: the temperature, the model and load line in words, the numbers, the chart's link, the verdict. */
@@ -31,7 +31,7 @@ final class CheckPage {
     }
 
     static String render(LibraryReader library, UnaryOperator<String> values, String query, CheckRun run, String problem,
-            boolean demoPresent) {
+            boolean demoPresent, ElementSection.View elements) {
         List<String[]> grades = new ArrayList<>();
         grades.add(new String[] {"", "typed in below"});
         for (GradeSummary grade : library.grades(null)) {
@@ -48,7 +48,7 @@ final class CheckPage {
         Results results = run == null ? null : new Results(Temperatures.celsius(run.result().temperature()), run.model().description(),
                 run.loadLine().describe(), CheckResults.rows(run), "/charts/check.svg?" + query, run.extrapolated(), run.verdict());
         View view = new View(new Layout.Frame("Check", "Check", demoPresent), problem, FormFields.choice(values, "grade", "grade", grades),
-                typed, FormFields.loadLine(values), duty, results);
+                typed, FormFields.loadLine(values), duty, results, elements);
         return Templates.render("check.jte", view);
     }
 }

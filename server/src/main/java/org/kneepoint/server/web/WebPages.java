@@ -14,6 +14,11 @@ import org.kneepoint.fitter.error.KneepointException;
 import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.chart.CheckChart;
+import org.kneepoint.server.chart.ElementMapChart;
+import org.kneepoint.server.app.elements.ElementCheckRun;
+import org.kneepoint.server.app.elements.ElementMap;
+import org.kneepoint.server.app.elements.MapPlane;
+import org.kneepoint.server.http.ElementsApi;
 import org.kneepoint.server.chart.FieldChart;
 import org.kneepoint.server.chart.GradeChart;
 import org.kneepoint.server.http.DesignRequests;
@@ -40,6 +45,7 @@ final class WebPages {
 
     private static final int CHART_WIDTH = 960;
     private static final int CHART_HEIGHT = 560;
+    private static final int ELEMENT_MAP_HEIGHT = 640;
 
     private final Library library;
     private final boolean tokenRequired;
@@ -48,6 +54,7 @@ final class WebPages {
     private final JobRegistry jobs;
     private final FormTokens forms;
     private final GradeModelCache models;
+    private final KeptElementChecks keptChecks = new KeptElementChecks();
 
     WebPages(Library library, ServerSettings settings, ImportStaging staging, JobRegistry jobs, FormTokens forms, GradeModelCache models) {
         this.library = library;
@@ -73,6 +80,23 @@ final class WebPages {
             svg(context, svg);
         });
         get(config, "/check", this::check);
+        config.routes.post("/check/elements", this::checkElements);
+        get(config, "/check/elements/{key}", context -> {
+            String key = context.pathParam("key");
+            MapPlane plane = MapPlane.named(context.queryParam("plane"), "query parameter 'plane'");
+            KeptElementChecks.Kept kept = keptChecks.get(key).orElseThrow(() -> new NotFoundException("no element check '" + key
+                    + "' (the server keeps the last few only); upload the files again"));
+            elementPage(context, new ElementSection.View(ElementSection.form(library.reader(), name -> null,
+                    access(context)), null, ElementSection.results(key, kept, plane)));
+        });
+        get(config, "/charts/elements/{key}.svg", context -> {
+            String key = context.pathParam("key");
+            MapPlane plane = MapPlane.named(context.queryParam("plane"), "query parameter 'plane'");
+            KeptElementChecks.Kept kept = keptChecks.get(key).orElseThrow(() -> new NotFoundException("no element check '" + key
+                    + "' (the server keeps the last few only)"));
+            svg(context, ElementMapChart.svg("Knee margin of " + kept.map().elements() + " elements, " + plane.label() + " plane",
+                    kept.map(), plane, CHART_WIDTH, ELEMENT_MAP_HEIGHT));
+        });
         get(config, "/charts/check.svg", context -> {
             CheckRun run = DesignRequests.check(context, library.reader(), models);
             String title = "Operating point at " + Temperatures.celsius(run.result().temperature());
@@ -120,7 +144,30 @@ final class WebPages {
                 problem = e.getMessage();
             }
         }
-        html(context, CheckPage.render(library.reader(), context::queryParam, context.queryString(), run, problem, demoPresent()));
+        html(context, CheckPage.render(library.reader(), context::queryParam, context.queryString(), run, problem, demoPresent(),
+                new ElementSection.View(ElementSection.form(library.reader(), name -> null, access(context)), null, null)));
+    }
+
+    /** An upload of element-field files from the Check page: its results, or the form again with the problem. */
+    private void checkElements(Context context) {
+        ElementSection.View section;
+        try {
+            MapPlane plane = MapPlane.named(context.formParam("plane"), "form field 'plane'");
+            ElementCheckRun run = ElementsApi.fromForm(context, library, models);
+            KeptElementChecks.Kept kept = new KeptElementChecks.Kept(run.document(), ElementMap.of(run, ElementMap.MAX_DOTS));
+            String key = keptChecks.keep(kept);
+            section = new ElementSection.View(ElementSection.form(library.reader(), context::formParam, access(context)), null,
+                    ElementSection.results(key, kept, plane));
+        } catch (KneepointException e) {
+            context.status(ErrorStatus.of(e));
+            section = new ElementSection.View(ElementSection.form(library.reader(), context::formParam, access(context)),
+                    "Nothing was checked. " + e.getMessage(), null);
+        }
+        elementPage(context, section);
+    }
+
+    private void elementPage(Context context, ElementSection.View section) {
+        html(context, CheckPage.render(library.reader(), name -> null, "", null, null, demoPresent(), section));
     }
 
     private void select(Context context) {
