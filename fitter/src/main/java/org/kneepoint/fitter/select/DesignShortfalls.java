@@ -7,7 +7,9 @@ import org.kneepoint.fitter.error.NumericalFailureException;
 import org.kneepoint.fitter.loadline.DesignCheckResult;
 import org.kneepoint.fitter.loadline.IntrinsicCurve;
 import org.kneepoint.fitter.loadline.LimitReason;
+import org.kneepoint.fitter.loadline.LossCheck;
 import org.kneepoint.fitter.loadline.WorkingLimit;
+import org.kneepoint.fitter.loadline.WorkingRange;
 import org.kneepoint.fitter.study.IntrinsicCoercivity;
 
 /**
@@ -34,26 +36,35 @@ public final class DesignShortfalls {
      * exist. {@code curve} is the grade's curve at the check's temperature.
      */
     public static List<Shortfall> of(DesignCheckResult check, IntrinsicCurve curve, Double minimumFluxDensity) {
+        return of(check.point().b(), check.kneeMarginField(), check.irreversibleLoss(), check.lossLimit(), check.working(),
+                check.temperature(), curve, minimumFluxDensity);
+    }
+
+    /** The same shortfalls for a selection's {@link LossCheck} at {@code temperature} (K) against {@code lossLimit} (a fraction). */
+    public static List<Shortfall> of(LossCheck check, double temperature, double lossLimit, IntrinsicCurve curve,
+            Double minimumFluxDensity) {
+        return of(check.point().b(), check.kneeMarginField(), check.irreversibleLoss(), lossLimit, check.working(), temperature,
+                curve, minimumFluxDensity);
+    }
+
+    private static List<Shortfall> of(double flux, Double kneeMargin, double loss, double lossLimit, WorkingRange working,
+            double temperature, IntrinsicCurve curve, Double minimumFluxDensity) {
         List<Shortfall> shortfalls = new ArrayList<>(4);
         permanentMagnet(curve).ifPresent(shortfalls::add);
-        double flux = check.point().b();
         if (minimumFluxDensity != null && flux < minimumFluxDensity) {
             shortfalls.add(new Shortfall(Shortfall.Requirement.MINIMUM_FLUX_DENSITY, minimumFluxDensity - flux));
         }
-        shortfalls.addAll(atPoint(flux, check.kneeMarginField(), check.irreversibleLoss(), check.lossLimit()));
-        WorkingLimit minimum = check.working().minimum();
-        WorkingLimit maximum = check.working().maximum();
+        shortfalls.addAll(atPoint(flux, kneeMargin, loss, lossLimit));
+        WorkingLimit minimum = working.minimum();
+        WorkingLimit maximum = working.maximum();
         if (maximum.reason() == LimitReason.NONE_IN_RANGE) {
-            shortfalls.add(new Shortfall(Shortfall.Requirement.WORKING_TEMPERATURE_FOUND,
-                    Math.max(0.0, check.irreversibleLoss() - check.lossLimit())));
+            shortfalls.add(new Shortfall(Shortfall.Requirement.WORKING_TEMPERATURE_FOUND, Math.max(0.0, loss - lossLimit)));
         } else {
-            if (maximum.reason() == LimitReason.LIMIT_REACHED && maximum.temperature() < check.temperature()) {
-                shortfalls.add(new Shortfall(Shortfall.Requirement.MAXIMUM_WORKING_TEMPERATURE,
-                        check.temperature() - maximum.temperature()));
+            if (maximum.reason() == LimitReason.LIMIT_REACHED && maximum.temperature() < temperature) {
+                shortfalls.add(new Shortfall(Shortfall.Requirement.MAXIMUM_WORKING_TEMPERATURE, temperature - maximum.temperature()));
             }
-            if (minimum.reason() == LimitReason.LIMIT_REACHED && minimum.temperature() > check.temperature()) {
-                shortfalls.add(new Shortfall(Shortfall.Requirement.MINIMUM_WORKING_TEMPERATURE,
-                        minimum.temperature() - check.temperature()));
+            if (minimum.reason() == LimitReason.LIMIT_REACHED && minimum.temperature() > temperature) {
+                shortfalls.add(new Shortfall(Shortfall.Requirement.MINIMUM_WORKING_TEMPERATURE, minimum.temperature() - temperature));
             }
         }
         return List.copyOf(shortfalls);

@@ -39,7 +39,8 @@ public final class GradeSelection {
         }
         LossCheck check = DesignCheck.forRanking(model, requirements.loadLine().pc(), requirements.field(), temperature,
                 requirements.maximumIrreversibleLoss());
-        List<Shortfall> shortfalls = DesignShortfalls.of(check, model.at(temperature), requirements.minimumFluxDensity());
+        List<Shortfall> shortfalls = DesignShortfalls.of(check, temperature, requirements.maximumIrreversibleLoss(), model.at(temperature),
+                requirements.minimumFluxDensity());
         double flux = check.point().b();
         double kneeMargin = check.kneeMarginField() == null ? Double.NaN : check.kneeMarginField();
         return new RankedGrade(candidate.name(), shortfalls, flux, kneeMargin, check.irreversibleLoss(),
