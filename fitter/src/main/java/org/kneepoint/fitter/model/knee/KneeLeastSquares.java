@@ -286,22 +286,11 @@ final class KneeLeastSquares {
         return dot(residuals, residuals, count);
     }
 
-    /** u·v over the first {@code count} entries, in four independent sums so that the additions need not wait on each other. */
     private static double dot(double[] u, double[] v, int count) {
-        double s0 = 0;
-        double s1 = 0;
-        double s2 = 0;
-        double s3 = 0;
-        int i = 0;
-        for (; i + 3 < count; i += 4) {
-            s0 += u[i] * v[i];
-            s1 += u[i + 1] * v[i + 1];
-            s2 += u[i + 2] * v[i + 2];
-            s3 += u[i + 3] * v[i + 3];
+        double sum = 0;
+        for (int i = 0; i < count; i++) {
+            sum += u[i] * v[i];
         }
-        for (; i < count; i++) {
-            s0 += u[i] * v[i];
-        }
-        return (s0 + s1) + (s2 + s3);
+        return sum;
     }
 }
