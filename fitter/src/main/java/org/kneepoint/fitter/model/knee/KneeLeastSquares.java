@@ -116,88 +116,15 @@ final class KneeLeastSquares {
                 evaluations);
     }
 
-    /** The fall of the sum of squares the linearized model predicts for the move from {@code model} to {@code trial}. */
+    /** The fall of the sum of squares the linearized model predicts for the move from {@code model} to {@code trial}: 2gᵀΔ − ΔᵀAΔ. */
     private static double predictedDecrease(KneeCurve model, KneeCurve trial, double[][] normal, double[] gradient) {
         double[] from = parameters(model);
         double[] to = parameters(trial);
-        double[] delta = new double[from.length];
-        for (int k = 0; k < from.length; k++) {
+        int n = from.length;
+        double[] delta = new double[n];
+        for (int k = 0; k < n; k++) {
             delta[k] = to[k] - from[k];
         }
-        return quadraticDecrease(delta, normal, gradient);
-    }
-
-    private static void clear(double[][] normal, double[] gradient) {
-        for (double[] row : normal) {
-            java.util.Arrays.fill(row, 0.0);
-        }
-        java.util.Arrays.fill(gradient, 0.0);
-    }
-
-    /**
-     * The damped Gauss–Newton step from {@code model}, pulled inside the bounds. A parameter that the step would carry
-     * past a bound is held where the bound puts it and the step solved again for the others (an active set), so that
-     * they take the step that is best with it held there, instead of crawling towards the bound.
-     */
-    private Step step(KneeCurve model, double[][] normal, double[] gradient, double lambda) {
-        int n = gradient.length;
-        double[] from = parameters(model);
-        boolean[] held = new boolean[n];
-        double[] heldStep = new double[n];
-        double[][] a = new double[n][n];
-        double[] b = new double[n];
-        double[] p = new double[n];
-        KneeCurve trial = model;
-        double[] step = new double[n];
-        boolean singular = false;
-        for (int pass = 0; pass <= n; pass++) {
-            for (int k = 0; k < n; k++) {
-                System.arraycopy(normal[k], 0, a[k], 0, n);
-                b[k] = gradient[k];
-            }
-            for (int k = 0; k < n; k++) {
-                if (held[k]) {
-                    for (int m = 0; m < n; m++) {
-                        b[m] -= normal[m][k] * heldStep[k];
-                    }
-                }
-            }
-            for (int k = 0; k < n; k++) {
-                if (held[k]) {
-                    for (int m = 0; m < n; m++) {
-                        a[k][m] = 0;
-                        a[m][k] = 0;
-                    }
-                    a[k][k] = 1;
-                    b[k] = 0;
-                }
-            }
-            double[] solved = SmallLinearSystem.solveDamped(a, b, lambda);
-            singular = solved == null;
-            for (int k = 0; k < n; k++) {
-                step[k] = held[k] ? heldStep[k] : singular ? 0.0 : solved[k];
-                p[k] = from[k] + step[k];
-            }
-            trial = bounded(model, p);
-            double[] q = parameters(trial);
-            boolean more = false;
-            for (int k = 0; k < n; k++) {
-                if (!held[k] && q[k] != p[k]) {
-                    held[k] = true;
-                    heldStep[k] = q[k] - from[k];
-                    more = true;
-                }
-            }
-            if (!more || singular) {
-                break;
-            }
-        }
-        return new Step(trial, singular ? Double.POSITIVE_INFINITY : quadraticDecrease(step, normal, gradient));
-    }
-
-    /** The fall of the sum of squares the linearized model predicts for a move δ: 2gᵀδ − δᵀAδ. */
-    private static double quadraticDecrease(double[] delta, double[][] normal, double[] gradient) {
-        int n = delta.length;
         double sum = 0;
         for (int a = 0; a < n; a++) {
             double row = 0;
@@ -209,10 +136,75 @@ final class KneeLeastSquares {
         return sum;
     }
 
+    private static void clear(double[][] normal, double[] gradient) {
+        for (double[] row : normal) {
+            java.util.Arrays.fill(row, 0.0);
+        }
+        java.util.Arrays.fill(gradient, 0.0);
+    }
+
     /**
-     * A step's model inside the bounds, and the fall of the sum of squares the linearized model predicts for the step
-     * (with no damping the Gauss–Newton decrement over the parameters not held at a bound), +∞ when the equations are
-     * singular.
+     * The damped Gauss–Newton step from {@code model}, pulled inside the bounds. A parameter that sits on a bound the
+     * step pushes against is kept where it is and the step solved again without it (an active set), so that the others
+     * take the step that is best with it held, instead of crawling along the bound.
+     */
+    private Step step(KneeCurve model, double[][] normal, double[] gradient, double lambda) {
+        int n = gradient.length;
+        double[] from = parameters(model);
+        boolean[] held = new boolean[n];
+        double[][] a = new double[n][n];
+        double[] b = new double[n];
+        double[] p = new double[n];
+        KneeCurve trial = model;
+        double decrease = Double.POSITIVE_INFINITY;
+        for (int pass = 0; pass <= n; pass++) {
+            for (int k = 0; k < n; k++) {
+                System.arraycopy(normal[k], 0, a[k], 0, n);
+                b[k] = gradient[k];
+            }
+            for (int k = 0; k < n; k++) {
+                if (held[k]) {
+                    for (int m = 0; m < n; m++) {
+                        a[k][m] = 0;
+                        a[m][k] = 0;
+                    }
+                    a[k][k] = 1;
+                    b[k] = 0;
+                }
+            }
+            double[] step = SmallLinearSystem.solveDamped(a, b, lambda);
+            decrease = Double.POSITIVE_INFINITY;
+            if (step == null) {
+                step = new double[n];
+            } else {
+                decrease = 0;
+                for (int k = 0; k < n; k++) {
+                    decrease += b[k] * step[k];
+                }
+            }
+            for (int k = 0; k < n; k++) {
+                p[k] = from[k] + step[k];
+            }
+            trial = bounded(model, p);
+            double[] q = parameters(trial);
+            boolean more = false;
+            for (int k = 0; k < n; k++) {
+                if (!held[k] && q[k] == from[k] && p[k] != from[k]) {
+                    held[k] = true;
+                    more = true;
+                }
+            }
+            if (!more) {
+                break;
+            }
+        }
+        return new Step(trial, decrease);
+    }
+
+    /**
+     * A step's model inside the bounds, and gᵀδ of the step before it was pulled inside them (the fall of the sum of
+     * squares the linearized model predicts for it; with no damping the Gauss–Newton decrement over the parameters
+     * not held on a bound), +∞ when the equations are singular.
      */
     private record Step(KneeCurve model, double decrease) {
     }
