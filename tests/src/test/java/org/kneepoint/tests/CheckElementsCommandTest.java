@@ -98,6 +98,21 @@ class CheckElementsCommandTest {
         assertTrue(table.out().contains("FAIL"), table.out());
     }
 
+    @Test
+    void the_report_holds_the_summary_the_map_in_the_chosen_plane_and_the_cautions() throws IOException {
+        Path hot = uniform("hot.csv", -4.5e5, 2);
+        Path report = folder.resolve("elements.html");
+        JsonNode json = json(CliRun.of(args("check-elements " + GRADE + " --temperature 141C --json --plane yz --report",
+                report.toString(), hot.toString())));
+        String html = Files.readString(report);
+        assertTrue(html.contains("data-key=\"irreversibleLossPercent\" data-value=\"" + json.get("irreversibleLossPercent").asDouble() + "\""),
+                "the report's loss is the command's");
+        assertTrue(html.contains("<svg") && html.contains(">y (mm)<") && html.contains(">z (mm)<"), "the map, yz plane, inline");
+        assertTrue(html.contains("model estimates"), "the caution");
+        assertFalse(html.contains("<script"), "no script: the report opens offline");
+        assertFalse(html.contains("href=\"/") || html.contains("src=\"/"), "nothing fetched from a server");
+    }
+
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', textBlock = """
         bad number      | 'x [mm],y [mm],z [mm],Hx [kA/m],Hy [kA/m],Hz [kA/m],V [mm³]\n0,0,0,0,0,-100,1\n0,0,0,0,oops,0,1\n' | kneepoint: bad.csv, line 3, column 5 (Hy [kA/m]): expected a finite number, got 'oops'
@@ -121,6 +136,8 @@ class CheckElementsCommandTest {
     @CsvSource(delimiter = '|', textBlock = """
         zero direction   | --direction 0,0,0
         bad rule         | --transverse sideways
+        bad plane        | --plane xw
+        report not html  | --report report.txt
         no such file     | --loss-limit 1%
         """)
     void bad_options_give_exit_2_and_one_line(String name, String option) throws IOException {

@@ -113,6 +113,17 @@ class ElementCheckPageTest {
         assertEquals(200, yz.statusCode(), yz.body());
         assertEquals(exact(page, "irreversibleLossPercent"), exact(yz.body(), "irreversibleLossPercent"));
         assertTrue(chart(yz.body()).endsWith("?plane=yz"));
+
+        Matcher link = Pattern.compile("href=\"(/check/elements/[^\"]+/report.html\\?plane=yz)\"").matcher(yz.body());
+        assertTrue(link.find(), "a link to the offline report of the map's plane");
+        HttpResponse<String> report = fixture.server().get(link.group(1));
+        assertEquals(200, report.statusCode(), report.body());
+        assertTrue(report.headers().firstValue("Content-Disposition").orElse("").startsWith("attachment"));
+        assertEquals(exact(page, "irreversibleLossPercent"), exact(report.body(), "irreversibleLossPercent"));
+        assertTrue(report.body().contains(">y (mm)<") && report.body().contains(">z (mm)<"), "the map inline, yz plane");
+        assertTrue(report.body().contains("&lt;img src=x onerror=alert(1)&gt;.csv"), "file names escaped in the report too");
+        assertFalse(report.body().contains("<script"), "no script");
+        assertEquals(404, fixture.server().get("/check/elements/no-such-key/report.html").statusCode());
     }
 
     @Test

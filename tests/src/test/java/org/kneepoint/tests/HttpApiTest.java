@@ -112,6 +112,21 @@ class HttpApiTest {
     }
 
     @Test
+    void export_after_damage_steps_is_the_cli_export_and_half_a_pair_is_refused() throws Exception {
+        JsonNode damaged = ok(server.get("/api/grades/" + name(GRADE) + "/export?temperature=20C&format=json&curve=intrinsic"
+                + "&after=" + java.net.URLEncoder.encode("100C:300kA/m, 20C:0", java.nio.charset.StandardCharsets.UTF_8) + "&pc=1"));
+        assertEquals(cli("export", GRADE, "--temperature", "20C", "--format", "json", "--curve", "intrinsic", "--after",
+                "100C:300kA/m, 20C:0", "--pc", "1", "--db", cliDb), damaged);
+        assertTrue(!damaged.equals(cli("export", GRADE, "--temperature", "20C", "--format", "json", "--curve", "intrinsic",
+                "--db", cliDb)), "the steps damage this grade (the export differs from the plain one)");
+        for (String query : new String[] {"&after=150C:300kA%2Fm", "&pc=2", "&after=150C:300kA%2Fm&pc=0", "&after=150C:300&pc=1"}) {
+            HttpResponse<String> refused = server.get("/api/grades/" + name(GRADE) + "/export?temperature=20C" + query);
+            assertEquals(400, refused.statusCode(), query + ": " + refused.body());
+            assertTrue(refused.body().contains("query parameter"), refused.body());
+        }
+    }
+
+    @Test
     void permeance_of_a_cylinder_a_ring_a_block_and_a_spheroid_is_the_cli_answer() throws Exception {
         assertEquals(cli("permeance", "cylinder", "--diameter", "10mm", "--length", "5mm", "--json"),
                 ok(server.get("/api/permeance/cylinder?diameter=10mm&length=5mm")));

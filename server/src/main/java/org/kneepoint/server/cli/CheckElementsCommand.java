@@ -2,6 +2,7 @@ package org.kneepoint.server.cli;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.kneepoint.fitter.elements.TransverseRule;
 import org.kneepoint.fitter.error.BadInputException;
@@ -12,7 +13,11 @@ import org.kneepoint.server.app.elements.Direction;
 import org.kneepoint.server.app.elements.ElementCheckRequest;
 import org.kneepoint.server.app.elements.ElementCheckRun;
 import org.kneepoint.server.app.elements.ElementChecks;
+import org.kneepoint.server.app.elements.ElementMap;
+import org.kneepoint.server.app.elements.MapPlane;
+import org.kneepoint.server.app.version.VersionInfo;
 import org.kneepoint.server.text.ElementCheckView;
+import org.kneepoint.server.web.ElementCheckReport;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -22,7 +27,7 @@ import picocli.CommandLine.Spec;
 
 /**
  * {@code kneepoint check-elements GRADE FILE... [--temperature T] [--direction x,y,z] [--loss-limit %] [--json]
- * [-o RESULTS.csv]}: every element of a field solver's result judged on the grade's curve over the load cases in
+ * [-o RESULTS.csv] [--report FILE.html [--plane xy|xz|yz]]}: every element of a field solver's result judged on the grade's curve over the load cases in
  * order (docs/element-fields.md); a typed-in grade (as {@code check} takes it) leaves GRADE out.
  */
 @Command(name = "check-elements", mixinStandardHelpOptions = true,
@@ -68,6 +73,15 @@ final class CheckElementsCommand implements Callable<Integer> {
             description = "Refuse files larger than this (default: ${DEFAULT-VALUE} bytes).")
     private long maxFileSize;
 
+    @Option(names = "--report", paramLabel = "FILE.html",
+            description = "Also write a self-contained HTML report (summary, map of the elements, worst elements, load cases,"
+                    + " assumptions, sources, cautions).")
+    private Path report;
+
+    @Option(names = "--plane", paramLabel = "PLANE", defaultValue = "xy",
+            description = "Plane the report's map is projected onto: xy, xz or yz (default: ${DEFAULT-VALUE}).")
+    private String plane;
+
     @Mixin
     private OutputOptions output;
 
@@ -78,6 +92,10 @@ final class CheckElementsCommand implements Callable<Integer> {
         List<String> files = named ? arguments.subList(1, arguments.size()) : arguments;
         if (files.isEmpty()) {
             throw new BadInputException(InputLocation.of("arguments"), "name the grade, then at least one element-field FILE");
+        }
+        MapPlane mapPlane = MapPlane.named(plane, "option --plane");
+        if (report != null && !report.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".html")) {
+            throw new BadInputException(InputLocation.of("option --report"), "the report is an .html file, got '" + report + "'");
         }
         TransverseRule rule;
         try {
@@ -91,6 +109,11 @@ final class CheckElementsCommand implements Callable<Integer> {
         ElementCheckRun run = ElementChecks.check(request, name -> GradeOptions.stored(name, libraryOption));
         if (results != null) {
             OutputFile.write(results, run.resultsCsv());
+        }
+        if (report != null) {
+            String inputs = "kneepoint " + String.join(" ", spec.commandLine().getParseResult().originalArgs());
+            OutputFile.write(report, ElementCheckReport.html(run.document(), ElementMap.of(run, ElementMap.MAX_DOTS), mapPlane, inputs,
+                    VersionInfo.version()));
         }
         output.print(spec.commandLine().getOut(), run::document, () -> ElementCheckView.table(run));
         return 0;

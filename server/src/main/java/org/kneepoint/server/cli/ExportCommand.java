@@ -7,7 +7,7 @@ import java.util.concurrent.Callable;
 import org.kneepoint.db.Library;
 import org.kneepoint.fitter.curve.Quantity;
 import org.kneepoint.importer.export.ExportUnits;
-import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.server.app.grades.CurveDamage;
 import org.kneepoint.server.app.grades.CurveExport;
 import org.kneepoint.server.app.grades.GradeCurves;
@@ -98,15 +98,6 @@ final class ExportCommand implements Callable<Integer> {
     }
 
     private CurveDamage damage() {
-        if (after == null && pc == null) {
-            return null;
-        }
-        if (after == null) {
-            throw new BadInputException("--pc sets the load line of the --after steps; give --after too, or leave out --pc");
-        }
-        if (pc == null) {
-            throw new BadInputException("--after needs --pc, the permeance coefficient of the load line its steps act on");
-        }
-        return new CurveDamage(pc, after.list());
+        return CurveDamage.of(pc, after == null ? null : after.list(), InputLocation.of("option --pc"), InputLocation.of("option --after"));
     }
 }

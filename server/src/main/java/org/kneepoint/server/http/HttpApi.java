@@ -136,7 +136,10 @@ public final class HttpApi {
                         ApiParameter.query("points", false, "resample to N points evenly spaced in H", "50"),
                         ApiParameter.query("units", false, "si (default) or cgs", "si"),
                         ApiParameter.query("shifted", false, "true: shift H by HcB so that B = 0 at H = 0", "false"),
-                        ApiParameter.query("bare", false, "true: two columns of numbers, no header (CSV only)", "false")),
+                        ApiParameter.query("bare", false, "true: two columns of numbers, no header (CSV only)", "false"),
+                        ApiParameter.query("after", false, "the curve of a magnet damaged by these steps TEMPERATURE:FIELD[:KIND] in order,"
+                                + " as the duty route takes them; needs pc", "150C:300kA/m,20C:0"),
+                        ApiParameter.query("pc", false, "permeance coefficient of the load line the 'after' steps act on", "2")),
                 ApiRoute.post("/api/import", "import uploaded files in one transaction", imports::upload, ApiResult.one(ImportReport.class),
                         ApiParameter.query("dryRun", false, "true: check and report, store nothing", "true")),
                 ApiRoute.get("/api/permeance/cylinder", "demagnetizing factors of a cylinder or ring", permeance::cylinder, ApiResult.one(PermeanceDocument.class),

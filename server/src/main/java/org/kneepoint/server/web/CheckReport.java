@@ -59,7 +59,7 @@ public final class CheckReport {
                 run.verdict()));
     }
 
-    private static String styleSheet() {
+    static String styleSheet() {
         try (InputStream in = CheckReport.class.getResourceAsStream("/web/kneepoint.css")) {
             return in == null ? "" : new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {

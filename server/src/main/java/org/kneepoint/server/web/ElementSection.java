@@ -32,11 +32,15 @@ final class ElementSection {
     }
 
     /**
-     * A check's results: the summary rows, the worst elements, the load cases, the map's link, links to the map in the
-     * other planes, what the map leaves out, and whether a curve was extrapolated.
+     * A check's results: its tables, the map's link, links to the map in the other planes and to the offline report,
+     * what the map leaves out, and whether a curve was extrapolated.
      */
-    record Results(List<Summary> summary, List<WorstRow> worst, List<CaseRow> cases, String chart, String plane,
-            List<PlaneLink> planes, String note, boolean extrapolated) {
+    record Results(Tables tables, String chart, String plane, List<PlaneLink> planes, String report, String note,
+            boolean extrapolated) {
+    }
+
+    /** A check's tables as the page and the report show them: the summary rows, the worst elements, the load cases. */
+    record Tables(List<Summary> summary, List<WorstRow> worst, List<CaseRow> cases) {
     }
 
     /** One summary value: in words with its unit, and its JSON key and exact SI value (as {@code --json} gives it). */
@@ -71,7 +75,15 @@ final class ElementSection {
     }
 
     static Results results(String key, KeptElementChecks.Kept kept, MapPlane plane) {
-        ElementCheckDocument document = kept.document();
+        List<PlaneLink> planes = new ArrayList<>();
+        for (MapPlane other : MapPlane.values()) {
+            planes.add(new PlaneLink(other.label(), "/check/elements/" + key + "?plane=" + other.label() + "#element-map", other == plane));
+        }
+        return new Results(tables(kept.document()), "/charts/elements/" + key + ".svg?plane=" + plane.label(), plane.label(), planes,
+                "/check/elements/" + key + "/report.html?plane=" + plane.label(), note(kept.map()), kept.document().extrapolated());
+    }
+
+    static Tables tables(ElementCheckDocument document) {
         List<Summary> summary = List.of(
                 new Summary("elements", "elements", Integer.toString(document.elements()), Integer.toString(document.elements())),
                 new Summary("volume", "volume", format("%.6g mm³", document.volume() * 1e9), Double.toString(document.volume())),
@@ -102,12 +114,7 @@ final class ElementSection {
             cases.add(new CaseRow(number++, loadCase.file(), EngineeringUnits.field(loadCase.averageFieldParallel()),
                     EngineeringUnits.percent(loadCase.volumeFractionPastKnee())));
         }
-        List<PlaneLink> planes = new ArrayList<>();
-        for (MapPlane other : MapPlane.values()) {
-            planes.add(new PlaneLink(other.label(), "/check/elements/" + key + "?plane=" + other.label() + "#element-map", other == plane));
-        }
-        return new Results(summary, worst, cases, "/charts/elements/" + key + ".svg?plane=" + plane.label(), plane.label(), planes,
-                note(kept.map()), document.extrapolated());
+        return new Tables(summary, worst, cases);
     }
 
     /** What the map draws, in words. */

@@ -15,6 +15,7 @@ import org.kneepoint.fitter.error.NotFoundException;
 import org.kneepoint.importer.csv.ReadLimits;
 import org.kneepoint.server.chart.CheckChart;
 import org.kneepoint.server.chart.ElementMapChart;
+import org.kneepoint.server.app.elements.ElementCheckDocument;
 import org.kneepoint.server.app.elements.ElementCheckRun;
 import org.kneepoint.server.app.elements.ElementMap;
 import org.kneepoint.server.app.elements.MapPlane;
@@ -39,6 +40,7 @@ import org.kneepoint.server.app.grades.GradeCurves;
 import org.kneepoint.server.app.imports.ImportPlan;
 import org.kneepoint.server.app.imports.ImportRun;
 import org.kneepoint.server.app.wording.Temperatures;
+import org.kneepoint.server.app.version.VersionInfo;
 
 /** The pages and charts of the web application and the routes that serve them. */
 final class WebPages {
@@ -88,6 +90,16 @@ final class WebPages {
                     + "' (the server keeps the last few only); upload the files again"));
             elementPage(context, new ElementSection.View(ElementSection.form(library.reader(), name -> null,
                     access(context)), null, ElementSection.results(key, kept, plane)));
+        });
+        get(config, "/check/elements/{key}/report.html", context -> {
+            String key = context.pathParam("key");
+            MapPlane plane = MapPlane.named(context.queryParam("plane"), "query parameter 'plane'");
+            KeptElementChecks.Kept kept = keptChecks.get(key).orElseThrow(() -> new NotFoundException("no element check '" + key
+                    + "' (the server keeps the last few only); upload the files again"));
+            context.header("Content-Disposition", "attachment; filename=\"element-check.html\"");
+            html(context, ElementCheckReport.html(kept.document(), kept.map(), plane, "element files uploaded to the Check page: "
+                    + String.join(", ", kept.document().loadCases().stream().map(ElementCheckDocument.LoadCase::file).toList()),
+                    VersionInfo.version()));
         });
         get(config, "/charts/elements/{key}.svg", context -> {
             String key = context.pathParam("key");

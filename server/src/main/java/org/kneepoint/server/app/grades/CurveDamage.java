@@ -3,6 +3,7 @@ package org.kneepoint.server.app.grades;
 import java.util.List;
 import java.util.Locale;
 import org.kneepoint.fitter.error.BadInputException;
+import org.kneepoint.fitter.error.InputLocation;
 import org.kneepoint.fitter.loadline.DutySequence;
 import org.kneepoint.fitter.loadline.DutyStep;
 import org.kneepoint.fitter.loadline.DutyStepResult;
@@ -18,16 +19,40 @@ public record CurveDamage(double pc, List<DutyStep> steps) {
 
     public CurveDamage {
         if (!(pc > 0) || Double.isInfinite(pc)) {
-            throw new BadInputException("--pc: the permeance coefficient of the load line of --after must be positive and finite, got " + pc);
+            throw new BadInputException("the permeance coefficient of the damage steps' load line must be positive and finite, got " + pc);
         }
         steps = List.copyOf(steps);
         if (steps.isEmpty()) {
-            throw new BadInputException("--after: give at least one step TEMPERATURE:FIELD such as 150C:300kA/m");
+            throw new BadInputException("give at least one step TEMPERATURE:FIELD such as 150C:300kA/m");
         }
         for (DutyStep step : steps) {
             InputLimits.temperatureProblem(step.temperature(), step.temperature() + " K").ifPresent(problem -> {
-                throw new BadInputException("--after: " + problem);
+                throw new BadInputException(problem);
             });
+        }
+    }
+
+    /**
+     * The damage asked for by an optional pair of inputs, or null when neither is given: one without the other, and any
+     * problem of either, is bad input at the place it was given ({@code pcAt}, {@code stepsAt}).
+     */
+    public static CurveDamage of(Double pc, List<DutyStep> steps, InputLocation pcAt, InputLocation stepsAt) {
+        if (steps == null && pc == null) {
+            return null;
+        }
+        if (steps == null) {
+            throw new BadInputException(pcAt, "sets the load line of the damage steps; give the steps too, or leave this out");
+        }
+        if (pc == null) {
+            throw new BadInputException(stepsAt, "needs the permeance coefficient of the load line its steps act on");
+        }
+        if (!(pc > 0) || Double.isInfinite(pc)) {
+            throw new BadInputException(pcAt, "the permeance coefficient must be positive and finite, got " + pc);
+        }
+        try {
+            return new CurveDamage(pc, steps);
+        } catch (BadInputException e) {
+            throw new BadInputException(stepsAt, e.getMessage());
         }
     }
 
